@@ -1,0 +1,30 @@
+/**
+ * Errors raised by the core. The core knows nothing of Excel: the worksheet adapter
+ * (functions/adapter.ts) maps each kind to an Excel error.
+ *
+ * - NotFoundError  → #N/A with its message (unknown couple, electrode, species, model, element,
+ *                    or a table that cannot be used)
+ * - InputError     → #VALUE! with its message (text that cannot be read as what was expected)
+ * - DomainError    → #NUM! (a number outside the function's domain, or a result outside double range)
+ */
+export class EchemError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = new.target.name;
+  }
+}
+
+/** Something named does not exist (→ #N/A with message). */
+export class NotFoundError extends EchemError {}
+
+/** Text or a value that cannot be read as the expected type (→ #VALUE! with message). */
+export class InputError extends EchemError {}
+
+/** A number outside the domain, or a result outside double range (→ #NUM!). */
+export class DomainError extends EchemError {}
+
+/** Throws DomainError unless x is a finite number; returns x. */
+export function finite(x: number, what = 'result'): number {
+  if (!Number.isFinite(x)) throw new DomainError(`${what} is outside the range of double-precision numbers`);
+  return x;
+}

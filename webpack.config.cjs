@@ -1,0 +1,66 @@
+/* Build: dist/functions.js (self-contained), dist/functions.json (generated from JSDoc),
+ * dist/taskpane.html + dist/taskpane.js (one shared runtime: the page loads both bundles),
+ * dist/manifest.xml and the icons. */
+const path = require('path');
+const HtmlWebpackPlugin = require('html-webpack-plugin');
+const CopyWebpackPlugin = require('copy-webpack-plugin');
+const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
+const fs = require('fs');
+
+// Every file in functions/declarations/ declares one family of worksheet functions.
+const declarations = fs
+  .readdirSync(path.resolve(__dirname, 'functions/declarations'))
+  .filter((f) => f.endsWith('.ts'))
+  .sort()
+  .map((f) => `./functions/declarations/${f}`);
+
+module.exports = (env, argv) => {
+  const production = argv.mode !== 'development';
+  return {
+    mode: production ? 'production' : 'development',
+    devtool: production ? false : 'source-map',
+    target: ['web', 'es2020'],
+    entry: {
+      functions: ['./functions/entry.ts', ...declarations],
+      taskpane: './taskpane/taskpane.ts',
+    },
+    output: {
+      path: path.resolve(__dirname, 'dist'),
+      filename: '[name].js',
+      globalObject: 'globalThis',
+      clean: true,
+    },
+    resolve: { extensions: ['.ts', '.js', '.json'] },
+    module: {
+      rules: [{ test: /\.ts$/, loader: 'ts-loader', exclude: /node_modules/, options: { transpileOnly: true } }],
+    },
+    performance: { hints: false },
+    plugins: [
+      new CustomFunctionsMetadataPlugin({ output: 'functions.json', input: declarations }),
+      new HtmlWebpackPlugin({
+        filename: 'taskpane.html',
+        template: './taskpane/taskpane.html',
+        chunks: ['functions', 'taskpane'],
+        chunksSortMode: 'manual',
+        inject: 'body',
+        scriptLoading: 'blocking',
+      }),
+      new CopyWebpackPlugin({
+        patterns: [
+          { from: 'manifest.xml', to: 'manifest.xml' },
+          { from: 'assets/*.png', to: '[name][ext]' },
+          { from: 'taskpane/taskpane.css', to: 'taskpane.css' },
+        ],
+      }),
+    ],
+    devServer: {
+      host: 'localhost',
+      port: 3000,
+      hot: false,
+      liveReload: false,
+      client: false,
+      headers: { 'Access-Control-Allow-Origin': '*' },
+      static: [{ directory: path.resolve(__dirname, 'node_modules/@microsoft/office-js/dist'), publicPath: '/office-js' }],
+    },
+  };
+};
