@@ -1,0 +1,270 @@
+/**
+ * Building the potential table from plain records, with every row checked.
+ *
+ * One builder serves the built-in table (data/*.json), a workbook's own copy and the task pane's
+ * validation as you type. A row with a problem is left out of the table and reported with its
+ * index, key and a plain-words message; the other rows are used. Look-ups go through Maps keyed by
+ * normalized keys, so their cost does not grow with the table's size.
+ */
+import { parseSpecies } from '../chem/formula';
+import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
+import { EchemError } from '../errors';
+import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
+import type { CoupleRecord, ElectrodeRecord } from './records';
+import type { CoupleRow, ElectrodeRow, PotentialTable } from './types';
+
+/** Plausible range of E° in V vs SHE (the aqueous electrochemical series spans about −3.1…+3.1 V). */
+export const E0_RANGE_V = { min: -4, max: 4 } as const;
+/** Plausible range of dE°/dT in mV/K (tabulated aqueous values lie within about ±2 mV/K). */
+export const DEDT_RANGE_MV_K = { min: -5, max: 5 } as const;
+
+/** A row that was left out of the table, and why. */
+export interface RowProblem {
+  readonly kind: 'couple' | 'electrode';
+  /** Index of the record in the list given (0-based). */
+  readonly index: number;
+  /** The record's key as written ("" when it had none). */
+  readonly key: string;
+  /** What is wrong, in plain words. */
+  readonly message: string;
+}
+
+/** The result of checking one record: the row when it is usable, and every problem found. */
+export interface Validated<Row> {
+  readonly row?: Row;
+  readonly problems: readonly string[];
+}
+
+export interface BuiltTable {
+  readonly table: PotentialTable;
+  /** The rows left out, in record order (couples first, then electrodes). */
+  readonly problems: readonly RowProblem[];
+}
+
+function isObject(x: unknown): x is Record<string, unknown> {
+  return typeof x === 'object' && x !== null && !Array.isArray(x);
+}
+
+function checkNumber(x: unknown, what: string, range: { min: number; max: number }, unit: string, problems: string[]): number | undefined {
+  if (typeof x !== 'number' || !Number.isFinite(x)) {
+    problems.push(`${what} must be a number; got ${x === undefined ? 'nothing' : JSON.stringify(x)}`);
+    return undefined;
+  }
+  if (x < range.min || x > range.max) {
+    problems.push(`${what} ${x} ${unit} is outside the plausible range ${range.min}…${range.max} ${unit}`);
+    return undefined;
+  }
+  return x;
+}
+
+function checkText(x: unknown, what: string, problems: string[], required: boolean): string | undefined {
+  if (x === undefined || x === null) {
+    if (required) problems.push(`${what} is missing`);
+    return undefined;
+  }
+  if (typeof x !== 'string') {
+    problems.push(`${what} must be text`);
+    return undefined;
+  }
+  if (required && x.trim() === '') {
+    problems.push(`${what} is empty`);
+    return undefined;
+  }
+  return x.trim();
+}
+
+/**
+ * Checks one couple record and, when it is usable, makes its row: the half-reaction parses and
+ * balances; the key is Ox/Red with Ox among the species on the left and Red among those on the
+ * right; n comes from the half-reaction; E° is a finite number within −4…+4 V; dE°/dT, when given,
+ * within −5…+5 mV/K; the source is not empty.
+ *
+ * Syntax: validateCoupleRecord(record)
+ * Example: validateCoupleRecord({ key: "Cu2+/Cu", halfReaction: "Cu2+ + 2e- -> Cu", e0: 0.3419, source: "CRC" }).row.n → 2
+ * See also: buildTable, validateElectrodeRecord
+ */
+export function validateCoupleRecord(record: unknown): Validated<CoupleRow> {
+  const problems: string[] = [];
+  if (!isObject(record)) return { problems: ['the row is not a record with key, halfReaction, e0 and source'] };
+  const key = checkText(record.key, 'the key', problems, true);
+  const text = checkText(record.halfReaction, 'the half-reaction', problems, true);
+  const e0 = checkNumber(record.e0, 'E°', E0_RANGE_V, 'V', problems);
+  let dEdT: number | undefined;
+  if (record.dEdT_mV_K !== undefined && record.dEdT_mV_K !== null) {
+    dEdT = checkNumber(record.dEdT_mV_K, 'dE°/dT', DEDT_RANGE_MV_K, 'mV/K', problems);
+  }
+  const source = checkText(record.source, 'the source', problems, true);
+  const note = checkText(record.note, 'the note', problems, false);
+
+  let parsed: HalfReaction | undefined;
+  if (text !== undefined) {
+    try {
+      parsed = parseHalfReaction(text);
+    } catch (e) {
+      problems.push(e instanceof EchemError ? e.message : `the half-reaction cannot be read: ${String(e)}`);
+    }
+  }
+  if (key !== undefined) {
+    const sides = splitCoupleKey(key);
+    if (sides === undefined) {
+      problems.push(`the key "${key}" must be written Ox/Red, e.g. "Cu2+/Cu"`);
+    } else {
+      const ox = keySpecies(sides.ox, 'Ox', key, problems);
+      const red = keySpecies(sides.red, 'Red', key, problems);
+      if (parsed !== undefined) {
+        if (ox !== undefined && !parsed.species.some((t) => t.side === 'ox' && t.species.key === ox)) {
+          problems.push(`the key's Ox "${sides.ox}" is not on the left of the half-reaction`);
+        }
+        if (red !== undefined && !parsed.species.some((t) => t.side === 'red' && t.species.key === red)) {
+          problems.push(`the key's Red "${sides.red}" is not on the right of the half-reaction`);
+        }
+      }
+    }
+  }
+  if (problems.length > 0 || key === undefined || text === undefined || e0 === undefined || source === undefined || parsed === undefined) {
+    return { problems };
+  }
+  const row: CoupleRow = {
+    key,
+    halfReaction: text,
+    n: parsed.n,
+    e0,
+    ...(dEdT === undefined ? {} : { dEdT_mV_K: dEdT }),
+    source,
+    ...(note === undefined || note === '' ? {} : { note }),
+    parsed,
+  };
+  return { row, problems };
+}
+
+function keySpecies(text: string, which: string, key: string, problems: string[]): string | undefined {
+  try {
+    const s = parseSpecies(text);
+    if (s.isElectron) {
+      problems.push(`the key "${key}" names the electron as ${which}`);
+      return undefined;
+    }
+    return s.key;
+  } catch (e) {
+    problems.push(`the key's ${which} "${text}" is not a species: ${e instanceof Error ? e.message : String(e)}`);
+    return undefined;
+  }
+}
+
+/**
+ * Checks one reference-electrode record and, when it is usable, makes its row: a non-empty key,
+ * aliases as a list of texts (may be empty or left out), the potential a finite number within
+ * −4…+4 V vs SHE, dE/dT when given within −5…+5 mV/K, a non-empty source.
+ *
+ * Syntax: validateElectrodeRecord(record)
+ * Example: validateElectrodeRecord({ key: "SCE", aliases: [], potential: 0.241, source: "…" }).row.key → "SCE"
+ * See also: buildTable, validateCoupleRecord
+ */
+export function validateElectrodeRecord(record: unknown): Validated<ElectrodeRow> {
+  const problems: string[] = [];
+  if (!isObject(record)) return { problems: ['the row is not a record with key, aliases, potential and source'] };
+  const key = checkText(record.key, 'the key', problems, true);
+  let aliases: string[] = [];
+  if (record.aliases !== undefined && record.aliases !== null) {
+    if (!Array.isArray(record.aliases) || record.aliases.some((a) => typeof a !== 'string' || a.trim() === '')) {
+      problems.push('the aliases must be a list of non-empty texts');
+    } else {
+      aliases = (record.aliases as string[]).map((a) => a.trim());
+    }
+  }
+  const potential = checkNumber(record.potential, 'the potential', E0_RANGE_V, 'V', problems);
+  let dEdT: number | undefined;
+  if (record.dEdT_mV_K !== undefined && record.dEdT_mV_K !== null) {
+    dEdT = checkNumber(record.dEdT_mV_K, 'dE/dT', DEDT_RANGE_MV_K, 'mV/K', problems);
+  }
+  const source = checkText(record.source, 'the source', problems, true);
+  const note = checkText(record.note, 'the note', problems, false);
+  if (problems.length > 0 || key === undefined || potential === undefined || source === undefined) return { problems };
+  const row: ElectrodeRow = {
+    key,
+    aliases,
+    potential,
+    ...(dEdT === undefined ? {} : { dEdT_mV_K: dEdT }),
+    source,
+    ...(note === undefined || note === '' ? {} : { note }),
+  };
+  return { row, problems };
+}
+
+/**
+ * Builds a potential table from records, checking every row (see validateCoupleRecord and
+ * validateElectrodeRecord). Rows with problems, and rows whose key (or, for electrodes, alias)
+ * repeats an earlier row's, are left out and listed in `problems`.
+ *
+ * Syntax: buildTable(version, coupleRecords, electrodeRecords)
+ * Example: buildTable("2026.1", [{ key: "Zn2+/Zn", halfReaction: "Zn2+ + 2e- -> Zn", e0: -0.7618, source: "CRC" }], []).table.findCouple("Zn(2+)/Zn").e0 → −0.7618
+ * See also: builtinTable, normalizeCoupleKey
+ */
+export function buildTable(version: string, coupleRecords: readonly unknown[], electrodeRecords: readonly unknown[]): BuiltTable {
+  const problems: RowProblem[] = [];
+  const keyOf = (r: unknown): string => (isObject(r) && typeof r.key === 'string' ? r.key : '');
+
+  const couples: CoupleRow[] = [];
+  const coupleIndex = new Map<string, CoupleRow>();
+  const coupleRowAt = new Map<string, number>();
+  coupleRecords.forEach((rec, index) => {
+    const v = validateCoupleRecord(rec);
+    if (v.row === undefined) {
+      problems.push({ kind: 'couple', index, key: keyOf(rec), message: v.problems.join('; ') });
+      return;
+    }
+    const k = normalizeCoupleKey(v.row.key);
+    const earlier = coupleRowAt.get(k);
+    if (earlier !== undefined) {
+      problems.push({ kind: 'couple', index, key: v.row.key, message: `the key "${v.row.key}" repeats the key of row ${earlier + 1}` });
+      return;
+    }
+    coupleRowAt.set(k, index);
+    coupleIndex.set(k, v.row);
+    couples.push(v.row);
+  });
+
+  const electrodes: ElectrodeRow[] = [];
+  const electrodeIndex = new Map<string, ElectrodeRow>();
+  const electrodeRowAt = new Map<string, number>();
+  electrodeRecords.forEach((rec, index) => {
+    const v = validateElectrodeRecord(rec);
+    if (v.row === undefined) {
+      problems.push({ kind: 'electrode', index, key: keyOf(rec), message: v.problems.join('; ') });
+      return;
+    }
+    const names = [...new Set([v.row.key, ...v.row.aliases].map(normalizeElectrodeKey))];
+    const clash = names.find((n) => electrodeRowAt.has(n));
+    if (clash !== undefined) {
+      problems.push({
+        kind: 'electrode',
+        index,
+        key: v.row.key,
+        message: `the name "${clash}" is already used by row ${electrodeRowAt.get(clash)! + 1}`,
+      });
+      return;
+    }
+    for (const n of names) {
+      electrodeRowAt.set(n, index);
+      electrodeIndex.set(n, v.row);
+    }
+    electrodes.push(v.row);
+  });
+
+  Object.freeze(couples);
+  Object.freeze(electrodes);
+  const table: PotentialTable = {
+    version,
+    couples,
+    electrodes,
+    findCouple(key: string): CoupleRow | undefined {
+      if (typeof key !== 'string') return undefined;
+      return coupleIndex.get(normalizeCoupleKey(key));
+    },
+    findElectrode(key: string): ElectrodeRow | undefined {
+      if (typeof key !== 'string') return undefined;
+      return electrodeIndex.get(normalizeElectrodeKey(key));
+    },
+  };
+  return { table, problems };
+}
