@@ -1,0 +1,25 @@
+import { NotFoundError } from '../errors';
+import type { ElectrodeRow } from '../table/types';
+
+/** A potential scale: the standard hydrogen electrode, the reversible hydrogen electrode, or a reference electrode. */
+export type Scale = { readonly kind: 'SHE' } | { readonly kind: 'RHE' } | { readonly kind: 'electrode'; readonly row: ElectrodeRow };
+
+/**
+ * Reads a scale name: "SHE" and "RHE" (any case, white space ignored), otherwise a key or alias of
+ * the electrode table found by `findElectrode`. Unknown names throw NotFoundError naming them.
+ *
+ * Syntax: resolveScale(name, findElectrode)
+ * Example: resolveScale(" rhe ", table.findElectrode) → { kind: "RHE" }
+ * See also: convertPotential
+ */
+export function resolveScale(name: string, findElectrode: (key: string) => ElectrodeRow | undefined): Scale {
+  const bare = name.replace(/\s+/g, '').toUpperCase();
+  if (bare === 'SHE') return { kind: 'SHE' };
+  if (bare === 'RHE') return { kind: 'RHE' };
+  const row = findElectrode(name);
+  if (row === undefined) {
+    const shown = name.length > 40 ? `${name.slice(0, 37)}…` : name;
+    throw new NotFoundError(`unknown scale "${shown}"; use "SHE", "RHE" or a reference electrode of the table such as "SCE" or "CSE"`);
+  }
+  return { kind: 'electrode', row };
+}

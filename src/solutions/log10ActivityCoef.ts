@@ -1,0 +1,30 @@
+import data from '../../data/debye-huckel.json';
+import { InputError } from '../errors';
+import type { ActivityModel } from './activityModel';
+import { debyeHuckelParameters } from './debyeHuckelParameters';
+
+/**
+ * log10 of an activity coefficient for a charge product |z₁z₂| (z² for a single ion, |z₊z₋| for the
+ * mean of a salt) at ionic strength I (mol/kg):
+ *   DHLL    −A·zz·√I
+ *   EDH     −A·zz·√I/(1 + B·a·√I)        (a, the ion size in Å, is required)
+ *   DAVIES  −A·zz·(√I/(1 + √I) − c·I)    (c = 0.3, Davies 1962)
+ * with A and B of water at the temperature (debyeHuckelParameters).
+ *
+ * Syntax: log10ActivityCoef(zz, ionicStrength, model, temperatureC, ionSizeA)
+ * Example: log10ActivityCoef(1, 0.1, "DAVIES", 25, null) → −0.1088
+ * See also: activityCoef, meanActivityCoef
+ */
+export function log10ActivityCoef(zz: number, ionicStrength: number, model: ActivityModel, temperatureC: number, ionSizeA: number | null): number {
+  const { A, B } = debyeHuckelParameters(temperatureC);
+  const s = Math.sqrt(ionicStrength);
+  switch (model) {
+    case 'DHLL':
+      return -A * zz * s;
+    case 'EDH':
+      if (ionSizeA === null) throw new InputError('the EDH model needs ion_size_A, the ion size parameter in Å (e.g. 9 for H+, 4 for Cl-)');
+      return (-A * zz * s) / (1 + B * ionSizeA * s);
+    case 'DAVIES':
+      return -A * zz * (s / (1 + s) - data.davies.c * ionicStrength);
+  }
+}
