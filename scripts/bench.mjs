@@ -1,0 +1,486 @@
+#!/usr/bin/env node
+/**
+ * Benchmark of the worksheet functions (issue 5): `npm run bench`.
+ *
+ * Loads the production bundle dist/functions.js exactly like tests/bundle/harness.ts does (node:vm,
+ * nothing but a CustomFunctions global) and, for each case, times the call through the worksheet
+ * entry point (the function the bundle registered, called with the arguments Excel passes: 2-D
+ * arrays for every parameter, null for omitted ones, an invocation object last) against the same
+ * arithmetic written as a bare loop over the same input in the same process, and prints the
+ * ratio bare / entry (1.0 = no overhead). Each figure is the median of several runs after a
+ * warm-up, entry and bare runs interleaved.
+ *
+ * Also: 100,000 separate scalar NERNST calls, a look-up in a 10,000-row table against the built-in
+ * one, cold start in fresh processes, and the gzipped sizes of the bundles.
+ *
+ * Options: --only name[,name]   run only these cases (names as printed)
+ *          --runs N             timed runs per case (default 7)
+ *          --json               print the figures as JSON as well
+ * Environment: CELLWRIGHT_DIST  another build directory (default dist/)
+ *
+ * A function that does not exist in the bundle yet is reported as "not yet available".
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync, readFileSync, readdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import vm from 'node:vm';
+import zlib from 'node:zlib';
+
+const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+const DIST = process.env.CELLWRIGHT_DIST ? resolve(process.env.CELLWRIGHT_DIST) : resolve(ROOT, 'dist');
+const args = process.argv.slice(2);
+const opt = (name) => {
+  const i = args.indexOf(name);
+  return i >= 0 ? args[i + 1] : undefined;
+};
+const ONLY = opt('--only')?.split(',');
+const RUNS = Number(opt('--runs') ?? 7);
+const JSON_OUT = args.includes('--json');
+
+/* ------------------------------------------------------------------------------------------ */
+/* Loading the bundle like the test harness, and the TypeScript core for the table cases      */
+/* ------------------------------------------------------------------------------------------ */
+
+class FakeError {
+  constructor(code, message) {
+    this.code = code;
+    this.message = message;
+  }
+}
+const ErrorCode = {
+  invalidValue: '#VALUE!',
+  notAvailable: '#N/A',
+  divisionByZero: '#DIV/0!',
+  invalidNumber: '#NUM!',
+  nullReference: '#NULL!',
+  invalidName: '#NAME?',
+  invalidReference: '#REF!',
+};
+
+/** Evaluates the bundle in a fresh context with only CustomFunctions; returns the registered functions. */
+function loadBundle(code = readFileSync(resolve(DIST, 'functions.js'), 'utf8')) {
+  const registered = new Map();
+  const CustomFunctions = {
+    Error: FakeError,
+    ErrorCode,
+    associate(idOrMap, fn) {
+      if (typeof idOrMap === 'string') registered.set(idOrMap.toUpperCase(), fn);
+      else for (const [k, v] of Object.entries(idOrMap)) registered.set(k.toUpperCase(), v);
+    },
+  };
+  const sandbox = { CustomFunctions };
+  vm.createContext(sandbox);
+  vm.runInContext(code, sandbox, { filename: 'functions.js' });
+  return registered;
+}
+
+/** Requires a TypeScript module of src/ (transpiled on the fly; no build step, no extra dependency). */
+function requireTs(path) {
+  const require = createRequire(import.meta.url);
+  if (!require.extensions['.ts']) {
+    const ts = require('typescript');
+    require.extensions['.ts'] = (module, filename) => {
+      const out = ts.transpileModule(readFileSync(filename, 'utf8'), {
+        compilerOptions: { module: ts.ModuleKind.CommonJS, target: ts.ScriptTarget.ES2020, esModuleInterop: true, resolveJsonModule: true },
+        fileName: filename,
+      });
+      module._compile(out.outputText, filename);
+    };
+  }
+  return require(resolve(ROOT, path));
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Timing                                                                                      */
+/* ------------------------------------------------------------------------------------------ */
+
+const median = (xs) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+};
+const now = () => performance.now();
+let sink = 0; // results are consumed so that no loop can be optimised away
+function consume(x) {
+  if (Array.isArray(x)) {
+    const last = x[x.length - 1];
+    sink += Array.isArray(last) ? (typeof last[last.length - 1] === 'number' ? 1 : 2) : 3;
+  } else sink += typeof x === 'number' ? x : 1;
+}
+
+/** Times `entry` and `bare` alternately: 2 warm-up rounds, then RUNS timed rounds; medians in ms. */
+function race(entry, bare) {
+  for (let i = 0; i < 2; i++) {
+    consume(entry());
+    consume(bare());
+  }
+  const te = [];
+  const tb = [];
+  for (let i = 0; i < RUNS; i++) {
+    let t = now();
+    consume(entry());
+    te.push(now() - t);
+    t = now();
+    consume(bare());
+    tb.push(now() - t);
+  }
+  return { entryMs: median(te), bareMs: median(tb) };
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Arithmetic written bare (same constants as src/constants.ts: CODATA 2018 exact values)      */
+/* ------------------------------------------------------------------------------------------ */
+
+const F = 1.602176634e-19 * 6.02214076e23;
+const R = 6.02214076e23 * 1.380649e-23;
+const T0 = 273.15;
+const LN10 = Math.LN10;
+
+const INVOCATION = { functionName: 'BENCH', address: 'Sheet1!A1', setResult() {}, onCanceled: null };
+const cell = (x) => [[x]];
+
+function grid(rows, cols, f) {
+  const out = new Array(rows);
+  for (let r = 0; r < rows; r++) {
+    const row = new Array(cols);
+    for (let c = 0; c < cols; c++) row[c] = f(r * cols + c, r, c);
+    out[r] = row;
+  }
+  return out;
+}
+
+/** A bare element-wise map producing the same 2-D shape as the input. */
+function mapGrid(input, f) {
+  const rows = input.length;
+  const out = new Array(rows);
+  for (let r = 0; r < rows; r++) {
+    const src = input[r];
+    const cols = src.length;
+    const row = new Array(cols);
+    for (let c = 0; c < cols; c++) row[c] = f(src[c]);
+    out[r] = row;
+  }
+  return out;
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Cases                                                                                       */
+/* ------------------------------------------------------------------------------------------ */
+
+const couplesData = JSON.parse(readFileSync(resolve(ROOT, 'data/couples.json'), 'utf8'));
+const coupleRecords = couplesData.couples ?? [];
+
+const results = [];
+function report(name, what, r, target) {
+  results.push({ name, what, ...r, target });
+  if (r.unavailable) {
+    console.log(`${name.padEnd(18)} ${what}: not yet available (${r.unavailable})`);
+    return;
+  }
+  const ratio = r.bareMs / r.entryMs;
+  r.ratio = ratio;
+  const met = target === undefined ? '' : ratio >= target ? `  target ≥ ${target}: met` : `  target ≥ ${target}: MISSED`;
+  console.log(
+    `${name.padEnd(18)} ${what}: entry ${r.entryMs.toFixed(2)} ms, bare ${r.bareMs.toFixed(2)} ms, ratio ${ratio.toFixed(2)}${met}`,
+  );
+}
+
+function caseRange(name, what, fn, target, entry, bare) {
+  if (ONLY && !ONLY.includes(name)) return;
+  if (!fn) return report(name, what, { unavailable: `no ${name.split('-')[0].toUpperCase()} in the bundle` }, target);
+  report(name, what, race(entry, bare), target);
+}
+
+function main() {
+  if (!existsSync(resolve(DIST, 'functions.js'))) {
+    console.log('dist/functions.js is missing: building (npm run build)…');
+    const b = spawnSync('npm', ['run', 'build', '--silent'], { cwd: ROOT, stdio: 'inherit', shell: process.platform === 'win32' });
+    if (b.status !== 0) process.exit(b.status ?? 1);
+  }
+  const cpu = (readFileSync('/proc/cpuinfo', 'utf8').match(/model name\s*:\s*(.*)/) ?? [])[1] ?? 'unknown CPU';
+  const cores = (readFileSync('/proc/cpuinfo', 'utf8').match(/^processor\s*:/gm) ?? []).length;
+  console.log(`Cellwright benchmark — ${new Date().toISOString().slice(0, 10)}, Node ${process.version}, ${cores} cores, ${cpu}`);
+  console.log(`median of ${RUNS} runs after 2 warm-up runs; ratio = bare loop / worksheet entry point (1.0 = no overhead)\n`);
+
+  const fns = loadBundle();
+  const get = (id) => fns.get(id);
+
+  // NERNST over a 1,000 × 1,000 range of Q, one call.
+  {
+    const fn = get('NERNST');
+    const Q = grid(1000, 1000, (i) => 10 ** ((i % 1200) / 100 - 6));
+    const e0 = 0.3419;
+    const n = 2;
+    caseRange(
+      'nernst-range',
+      'NERNST(0.3419, 2, Q[1000×1000])',
+      fn,
+      0.5,
+      () => fn(cell(e0), cell(n), Q, null, INVOCATION),
+      () => {
+        const k = (R * (25 + T0)) / (n * F);
+        return mapGrid(Q, (q) => e0 - k * Math.log(q));
+      },
+    );
+  }
+
+  // EMF over a 316 × 316 range of couple keys against one anode key.
+  {
+    const fn = get('EMF');
+    const keys = coupleRecords.map((c) => c.key);
+    const cathodes = grid(316, 316, (i) => keys[i % keys.length]);
+    const anode = 'Zn2+/Zn';
+    const e0ByKey = new Map(coupleRecords.map((c) => [c.key, c.e0]));
+    caseRange(
+      'emf-range',
+      'EMF(keys[316×316], "Zn2+/Zn")',
+      fn,
+      0.25,
+      () => fn(cathodes, cell(anode), null, INVOCATION),
+      () => {
+        const ea = e0ByKey.get(anode);
+        return mapGrid(cathodes, (k) => e0ByKey.get(k) - ea);
+      },
+    );
+  }
+
+  // HALFCELL over 100,000 pH values for MnO4-/Mn2+ (MnO4- + 8H+ + 5e- -> Mn2+ + 4H2O).
+  {
+    const fn = get('HALFCELL');
+    const pH = grid(100000, 1, (i) => (i % 1400) / 100);
+    const key = 'MnO4-/Mn2+';
+    const rec = coupleRecords.find((c) => c.key === key);
+    const rows = new Map([[key, { e0: rec?.e0 ?? 1.507, n: 5, h: 8 }]]);
+    caseRange(
+      'halfcell-range',
+      'HALFCELL("MnO4-/Mn2+", , , pH[100000×1])',
+      fn,
+      0.25,
+      () => fn(cell(key), null, null, pH, null, INVOCATION),
+      () => {
+        const k = (R * (25 + T0) * LN10) / F;
+        return mapGrid(pH, (p) => {
+          const row = rows.get(key);
+          return row.e0 - ((k * row.h) / row.n) * p;
+        });
+      },
+    );
+  }
+
+  // DEPOSITMASS over a 100,000-cell range of currents: m = I·t·3600·M/(nF)·efficiency.
+  {
+    const fn = get('DEPOSITMASS');
+    const I = grid(100000, 1, (i) => 1 + (i % 500) / 10);
+    const M = 63.546; // Cu, IUPAC 2021 abridged
+    caseRange(
+      'depositmass-range',
+      'DEPOSITMASS(I[100000×1], 1 h, "Cu", 2)',
+      fn,
+      0.5,
+      () => fn(I, cell(1), cell('Cu'), cell(2), null, INVOCATION),
+      () => mapGrid(I, (i) => (i * 1 * 3600 * M) / (2 * F)),
+    );
+  }
+
+  // ACTIVITYCOEF over a 100,000-cell range of ionic strengths (Davies, z = 2, 25 °C).
+  {
+    const fn = get('ACTIVITYCOEF');
+    const I = grid(100000, 1, (i) => (1 + (i % 500)) / 1000);
+    const A = 0.5091; // Debye–Hückel A at 25 °C, (kg/mol)^½
+    caseRange(
+      'activitycoef-range',
+      'ACTIVITYCOEF(2, I[100000×1]) (Davies)',
+      fn,
+      0.5,
+      () => fn(cell(2), I, null, null, null, INVOCATION),
+      () =>
+        mapGrid(I, (is) => {
+          const s = Math.sqrt(is);
+          return 10 ** (-A * 4 * (s / (1 + s) - 0.3 * is));
+        }),
+    );
+  }
+
+  // 100,000 separate scalar NERNST calls (Excel's per-cell path: every argument a 1×1 array).
+  if (!ONLY || ONLY.includes('nernst-scalar')) {
+    const fn = get('NERNST');
+    if (!fn) report('nernst-scalar', '100000 scalar calls', { unavailable: 'no NERNST in the bundle' });
+    else {
+      const N = 100000;
+      const qs = Array.from({ length: N }, (_, i) => [[10 ** ((i % 1200) / 100 - 6)]]);
+      const e0 = [[0.3419]];
+      const n = [[2]];
+      const bareNernst = (E0, nn, q, t) => E0 - ((R * (t + T0)) / (nn * F)) * Math.log(q);
+      const r = race(
+        () => {
+          let last;
+          for (let i = 0; i < N; i++) last = fn(e0, n, qs[i], null, INVOCATION);
+          return last;
+        },
+        () => {
+          let s = 0;
+          for (let i = 0; i < N; i++) s += bareNernst(0.3419, 2, qs[i][0][0], 25);
+          return s;
+        },
+      );
+      const perCallUs = (r.entryMs * 1000) / N;
+      results.push({ name: 'nernst-scalar', what: '100000 scalar calls', ...r, perCallUs, targetUs: 1 });
+      console.log(
+        `${'nernst-scalar'.padEnd(18)} 100000 scalar NERNST calls: ${r.entryMs.toFixed(2)} ms = ${perCallUs.toFixed(3)} µs/call (bare ${r.bareMs.toFixed(2)} ms)  target < 1 µs: ${perCallUs < 1 ? 'met' : 'MISSED'}`,
+      );
+    }
+  }
+
+  // Look-up in a 10,000-row table against the built-in table (the core's findCouple).
+  if (!ONLY || ONLY.includes('table-lookup')) tableLookup();
+
+  // Cold start, in fresh processes.
+  if (!ONLY || ONLY.includes('cold-start')) coldStart();
+
+  // Bundle sizes.
+  if (!ONLY || ONLY.includes('sizes')) {
+    for (const f of ['functions.js', 'taskpane.js']) {
+      const p = resolve(DIST, f);
+      if (!existsSync(p)) {
+        console.log(`${'size'.padEnd(18)} ${f}: missing`);
+        continue;
+      }
+      const raw = readFileSync(p);
+      const gz = zlib.gzipSync(raw, { level: 9 }).length;
+      results.push({ name: `size ${f}`, bytes: raw.length, gzipBytes: gz });
+      const target = f === 'functions.js' ? `  target < 60 KB: ${gz < 60 * 1024 ? 'met' : 'MISSED'}` : '';
+      console.log(`${'size'.padEnd(18)} ${f}: ${(raw.length / 1024).toFixed(1)} KB, gzipped ${(gz / 1024).toFixed(1)} KB${target}`);
+    }
+  }
+
+  if (JSON_OUT) console.log(JSON.stringify({ date: new Date().toISOString(), node: process.version, cpu, cores, results }, null, 1));
+  if (sink === 42) console.log(''); // keeps `sink` observable
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Table look-ups                                                                              */
+/* ------------------------------------------------------------------------------------------ */
+
+/** 10,000 balanced, distinct synthetic couples: CnH2nO2 + 2H+ + 2e- -> CnH2n+2O2. */
+function syntheticRecords(count) {
+  const out = [];
+  for (let i = 1; i <= count; i++) {
+    const ox = `C${i}H${2 * i}O2`;
+    const red = `C${i}H${2 * i + 2}O2`;
+    out.push({
+      key: `${ox}/${red}`,
+      halfReaction: `${ox} + 2H+ + 2e- -> ${red}`,
+      e0: ((i % 800) - 400) / 100,
+      source: 'synthetic row for the benchmark',
+    });
+  }
+  return out;
+}
+
+function tableLookup() {
+  let tableMod;
+  let builtinMod;
+  try {
+    tableMod = requireTs('src/table/table.ts');
+    builtinMod = requireTs('src/table/builtin.ts');
+  } catch (e) {
+    report('table-lookup', '10000-row table', { unavailable: `the table module cannot be loaded: ${e.message}` });
+    return;
+  }
+  const built = builtinMod.builtinTable();
+  const big = tableMod.buildTable('bench', [...coupleRecords, ...syntheticRecords(10000)], []);
+  if (big.problems.length > 0) console.log(`  (${big.problems.length} synthetic rows rejected: ${big.problems[0].message})`);
+  const N = 100000;
+  const builtinKeys = built.couples.map((c) => c.key);
+  const bigKeys = big.table.couples.map((c) => c.key);
+  // the same number of distinct keys in both runs, so that only the table's size differs
+  const pick = (keys) => Array.from({ length: N }, (_, i) => keys[(i * 7919) % keys.length]);
+  const qBuiltin = pick(builtinKeys);
+  const qBig = pick(bigKeys.slice(-builtinKeys.length));
+  const look = (t, qs) => () => {
+    let s = 0;
+    for (let i = 0; i < N; i++) s += t.findCouple(qs[i]).e0;
+    return s;
+  };
+  const r = race(look(big.table, qBig), look(built, qBuiltin));
+  const nsBig = (r.entryMs * 1e6) / N;
+  const nsBuiltin = (r.bareMs * 1e6) / N;
+  results.push({ name: 'table-lookup', rows: big.table.couples.length, nsBig, nsBuiltin, ratio: nsBuiltin / nsBig });
+  console.log(
+    `${'table-lookup'.padEnd(18)} findCouple: ${big.table.couples.length}-row table ${nsBig.toFixed(0)} ns, built-in (${built.couples.length} rows) ${nsBuiltin.toFixed(0)} ns per look-up; ratio ${(nsBuiltin / nsBig).toFixed(2)} (1.0 = cost does not grow with size)`,
+  );
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Cold start                                                                                  */
+/* ------------------------------------------------------------------------------------------ */
+
+/** In a child process: what a fresh runtime pays before the first cell answers. */
+function coldChild(what) {
+  const t0 = now();
+  if (what === 'bundle') {
+    const code = readFileSync(resolve(DIST, 'functions.js'), 'utf8');
+    const t1 = now();
+    const fns = loadBundle(code);
+    const t2 = now();
+    // first table-backed answer: builds the built-in table
+    const first = fns.get('E0') ?? fns.get('ELECTRONS') ?? fns.get('EMF');
+    const v = first ? first(cell('Cu2+/Cu'), null, INVOCATION) : null;
+    const t3 = now();
+    if (first && typeof v?.[0]?.[0] !== 'number') throw new Error(`E0 did not answer: ${JSON.stringify(v)}`);
+    return { readMs: t1 - t0, evalRegisterMs: t2 - t1, firstTableAnswerMs: t3 - t2, registered: fns.size, tableFn: !!first };
+  }
+  if (what === 'table') {
+    const table = requireTs('src/table/table.ts');
+    const t1 = now();
+    const couples = JSON.parse(readFileSync(resolve(ROOT, 'data/couples.json'), 'utf8'));
+    const electrodes = existsSync(resolve(ROOT, 'data/electrodes.json'))
+      ? JSON.parse(readFileSync(resolve(ROOT, 'data/electrodes.json'), 'utf8'))
+      : { electrodes: [] };
+    const built = table.buildTable(couples.version, couples.couples, electrodes.electrodes ?? []);
+    const t2 = now();
+    return { parseValidateMs: t2 - t1, rows: built.table.couples.length + built.table.electrodes.length, problems: built.problems.length };
+  }
+  throw new Error(`unknown child ${what}`);
+}
+
+function coldStart() {
+  const runs = 7;
+  const child = (what) => {
+    const out = [];
+    for (let i = 0; i < runs; i++) {
+      const r = spawnSync(process.execPath, [fileURLToPath(import.meta.url), '--child', what], { cwd: ROOT, encoding: 'utf8', env: process.env });
+      if (r.status !== 0) throw new Error(`cold-start child failed: ${r.stderr}`);
+      out.push(JSON.parse(r.stdout.trim().split('\n').pop()));
+    }
+    return out;
+  };
+  const b = child('bundle');
+  const evalReg = median(b.map((x) => x.evalRegisterMs));
+  const firstAns = median(b.map((x) => x.firstTableAnswerMs));
+  const total = median(b.map((x) => x.evalRegisterMs + x.firstTableAnswerMs));
+  results.push({ name: 'cold-start', evalRegisterMs: evalReg, firstTableAnswerMs: firstAns, totalMs: total, registered: b[0].registered });
+  console.log(
+    `${'cold-start'.padEnd(18)} evaluate + register ${b[0].registered} functions: ${evalReg.toFixed(1)} ms; first table answer (built-in table built): ${firstAns.toFixed(1)} ms; together ${total.toFixed(1)} ms  target < 50 ms: ${total < 50 ? 'met' : 'MISSED'}${b[0].tableFn ? '' : ' (no table function in the bundle yet)'}`,
+  );
+  try {
+    const t = child('table');
+    const pv = median(t.map((x) => x.parseValidateMs));
+    results.push({ name: 'cold-table', parseValidateMs: pv, rows: t[0].rows });
+    console.log(`${'cold-table'.padEnd(18)} parse + validate the built-in table (${t[0].rows} rows, fresh process): ${pv.toFixed(1)} ms`);
+  } catch (e) {
+    console.log(`${'cold-table'.padEnd(18)} not yet available (${e.message.split('\n')[0]})`);
+  }
+  const storeDir = resolve(ROOT, 'src/store');
+  if (!existsSync(storeDir) || readdirSync(storeDir).length === 0) {
+    console.log(`${'cold-store'.padEnd(18)} reading a 2000-row stored table: not yet available (no src/store)`);
+  }
+}
+
+if (args[0] === '--child') {
+  console.log(JSON.stringify(coldChild(args[1])));
+} else {
+  main();
+}
