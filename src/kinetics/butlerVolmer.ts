@@ -9,7 +9,7 @@ import { cathodicAlpha } from './cathodicAlpha';
  * A current outside double range throws DomainError.
  *
  * Syntax: butlerVolmer(i0, overpotentialV, alphaA, alphaC, temperatureC)
- * Example: butlerVolmer(1e-3, 0.1, 0.5, null, 25) → 6.99e-3 (with i0 in A/cm², A/cm²)
+ * Example: butlerVolmer(1e-3, 0.1, 0.5, null, 25) → 6.858e-3 (with i0 in A/cm², A/cm²)
  * See also: overpotential, tafelSlope
  *
  * @param i0 exchange current density (> 0), any unit

@@ -53,7 +53,7 @@ function solvePositive(a: number, c: number, L: number): number {
  * negative η. αc defaults to 1 − αa.
  *
  * Syntax: overpotential(i, i0, alphaA, alphaC, temperatureC)
- * Example: overpotential(6.99e-3, 1e-3, 0.5, null, 25) → 0.100 V
+ * Example: overpotential(6.858e-3, 1e-3, 0.5, null, 25) → 0.100 V
  * See also: butlerVolmer, tafelSlope
  *
  * @param i current density, in the units of i0 (anodic positive)

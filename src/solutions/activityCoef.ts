@@ -9,7 +9,7 @@ import { log10ActivityCoef } from './log10ActivityCoef';
  * A neutral species (z = 0) has γ = 1 in all three.
  *
  * Syntax: activityCoef(charge, ionicStrength, model, temperatureC, ionSizeA)
- * Example: activityCoef(2, 0.1, "DAVIES", 25, null) → 0.368
+ * Example: activityCoef(2, 0.1, "DAVIES", 25, null) → 0.372
  * See also: meanActivityCoef, ionicStrength
  *
  * @param charge charge number z

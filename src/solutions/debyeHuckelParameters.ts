@@ -46,7 +46,7 @@ export interface DebyeHuckelParameters {
  * Throws DomainError outside 0…100 °C.
  *
  * Syntax: debyeHuckelParameters(temperatureC)
- * Example: debyeHuckelParameters(25) → { A: 0.5108, B: 0.3286, … }
+ * Example: debyeHuckelParameters(25) → { A: 0.5108, B: 0.3287, … }
  * See also: activityCoef, meanActivityCoef
  */
 export function debyeHuckelParameters(temperatureC: number): DebyeHuckelParameters {

@@ -12,7 +12,7 @@ import { debyeHuckelParameters } from './debyeHuckelParameters';
  * with A and B of water at the temperature (debyeHuckelParameters).
  *
  * Syntax: log10ActivityCoef(zz, ionicStrength, model, temperatureC, ionSizeA)
- * Example: log10ActivityCoef(1, 0.1, "DAVIES", 25, null) → −0.1088
+ * Example: log10ActivityCoef(1, 0.1, "DAVIES", 25, null) → −0.1074
  * See also: activityCoef, meanActivityCoef
  */
 export function log10ActivityCoef(zz: number, ionicStrength: number, model: ActivityModel, temperatureC: number, ionSizeA: number | null): number {

@@ -8,7 +8,7 @@ import { log10ActivityCoef } from './log10ActivityCoef';
  * charges count (−1 and 1 both describe a univalent anion). Models as for activityCoef.
  *
  * Syntax: meanActivityCoef(zCation, zAnion, ionicStrength, model, temperatureC, ionSizeA)
- * Example: meanActivityCoef(1, −1, 0.1, "DAVIES", 25, null) → 0.778 (NaCl 0.1 mol/kg; measured 0.778)
+ * Example: meanActivityCoef(1, −1, 0.1, "DAVIES", 25, null) → 0.781 (NaCl 0.1 mol/kg; measured 0.778)
  * See also: activityCoef, ionicStrength
  *
  * @param zCation charge of the cation

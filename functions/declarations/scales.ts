@@ -1,0 +1,37 @@
+/**
+ * Worksheet declarations: reference electrodes and potential scales.
+ *
+ * Each declaration is JSDoc for custom-functions-metadata-plugin (which writes dist/functions.json
+ * and appends the CustomFunctions.associate calls) and a body of one call into the adapter-built
+ * function of the same id in functions/families/scales.ts. Arguments are any[][] so that each
+ * accepts a single value or a range; results are 2-D arrays and spill.
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import * as F from '../families/scales';
+
+/**
+ * Potential of a reference electrode vs SHE, in V, from the electrode table; at another temperature E(25 °C) + (dE/dT)·(T − 25).
+ * @customfunction REFPOTENTIAL
+ * @helpurl https://localhost:3000/docs/functions.html#refpotential
+ * @param electrode Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).
+ * @param [temperature_C] Temperature in °C (default 25; 0 to 100, and only where the table has dE/dT).
+ * @returns Potential in V vs SHE.
+ */
+function refPotential(electrode: any[][], temperature_C?: any[][]): any[][] {
+  return F.REFPOTENTIAL(electrode, temperature_C) as any;
+}
+
+/**
+ * The same potential on another scale, in V: "SHE", "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table.
+ * @customfunction CONVERTPOTENTIAL
+ * @helpurl https://localhost:3000/docs/functions.html#convertpotential
+ * @param potential_V Potential on the from_scale, in V.
+ * @param from_scale Scale the potential is given on: "SHE", "RHE" or an electrode key such as "CSE" or "SCE".
+ * @param to_scale Scale wanted: "SHE", "RHE" or an electrode key.
+ * @param [pH] pH of the solution, needed when either scale is "RHE" (no default).
+ * @param [temperature_C] Temperature in °C (default 25).
+ * @returns Potential in V on the to_scale.
+ */
+function convertPotential(potential_V: any[][], from_scale: any[][], to_scale: any[][], pH?: any[][], temperature_C?: any[][]): any[][] {
+  return F.CONVERTPOTENTIAL(potential_V, from_scale, to_scale, pH, temperature_C) as any;
+}
