@@ -1,0 +1,56 @@
+/**
+ * Worksheet declarations: look-ups in the potential table in use (the workbook's, else the
+ * built-in one).
+ *
+ * Each declaration is JSDoc for custom-functions-metadata-plugin (which writes dist/functions.json
+ * and appends the CustomFunctions.associate calls) and a body of one call into the adapter-built
+ * function of the same id in functions/families/table.ts. Arguments are any[][] so that each
+ * accepts a single value or a range; results are 2-D arrays and spill.
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import * as F from '../families/table';
+
+/**
+ * Standard potential of a couple, in V vs SHE; at another temperature E°(25 °C) + (dE°/dT)·(T − 25). #N/A when the couple has no stored dE°/dT and T ≠ 25 °C; #NUM! outside 0…100 °C.
+ * @customfunction E0
+ * @helpurl https://localhost:3000/docs/functions.html#e0
+ * @param couple Key of the potential table, written Ox/Red (e.g. "Cu2+/Cu", "O2/H2O").
+ * @param [temperature_C] Temperature in °C, 0 to 100 (default 25).
+ * @returns E° in V vs SHE.
+ */
+function e0(couple: any[][], temperature_C?: any[][]): any[][] {
+  return F.E0(couple, temperature_C) as any;
+}
+
+/**
+ * Electrons n taken up by a couple's half-reaction as written (dimensionless).
+ * @customfunction ELECTRONS
+ * @helpurl https://localhost:3000/docs/functions.html#electrons
+ * @param couple Key of the potential table, written Ox/Red (e.g. "MnO4-/Mn2+").
+ * @returns n, a whole number.
+ */
+function electrons(couple: any[][]): any[][] {
+  return F.ELECTRONS(couple) as any;
+}
+
+/**
+ * The half-reaction of a couple as text, written as a reduction (e.g. "MnO4- + 8H+ + 5e- -> Mn2+ + 4H2O").
+ * @customfunction HALFREACTION
+ * @helpurl https://localhost:3000/docs/functions.html#halfreaction
+ * @param couple Key of the potential table, written Ox/Red.
+ * @returns The half-reaction (text).
+ */
+function halfReaction(couple: any[][]): any[][] {
+  return F.HALFREACTION(couple) as any;
+}
+
+/**
+ * The published source of a couple's E° (and dE°/dT), as text.
+ * @customfunction SOURCE
+ * @helpurl https://localhost:3000/docs/functions.html#source
+ * @param couple Key of the potential table, written Ox/Red.
+ * @returns The source (text).
+ */
+function source(couple: any[][]): any[][] {
+  return F.SOURCE(couple) as any;
+}
