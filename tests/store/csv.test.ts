@@ -1,0 +1,98 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { CSV_COLUMNS, exportCsv, importCsv } from '../../src/store/csv';
+import { builtin, manyCouples } from './fixtures';
+
+const B = builtin();
+const header = CSV_COLUMNS.join(',');
+
+describe('CSV layout 1', () => {
+  it('round-trips the built-in table exactly', () => {
+    const text = exportCsv(B, 'built-in table 2026.1');
+    const r = importCsv(text);
+    expect(r.fileProblem).toBeUndefined();
+    expect(r.rejected).toEqual([]);
+    expect(r.couples).toEqual(B.couples);
+    expect(r.electrodes).toEqual(B.electrodes);
+    expect(text.startsWith('\uFEFF# Cellwright potential table')).toBe(true);
+    expect(text.includes('\r\n')).toBe(true);
+  });
+
+  it('round-trips hostile text: quotes, commas, line breaks, markup and formula starts', () => {
+    const rows = [
+      { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.34, source: '=HYPERLINK("http://x","y")', note: '<img src=x onerror=alert(1)>, "quoted"\nsecond line' },
+      { key: 'Ag+/Ag', halfReaction: 'Ag+ + e- -> Ag', e0: 0.7996, source: '+1 lab, @team', note: '-minus start' },
+    ];
+    const text = exportCsv({ couples: rows, electrodes: [] }, 'test');
+    expect(text).not.toMatch(/^=|,=|,\+|,@/m); // no cell starts a formula
+    const r = importCsv(text);
+    expect(r.rejected).toEqual([]);
+    expect(r.couples).toEqual(rows);
+  });
+
+  it('reports each bad line with its number and reason, and keeps the good ones apart', () => {
+    const text = [
+      '# a comment, with "quotes',
+      header,
+      'couple,Cu2+/Cu,Cu2+ + 2e- -> Cu,,0.3419,0.011,CRC,',
+      'couple,Fe3+/Fe2+,Fe3+ + e- -> Fe2+,,abc,,CRC,',
+      'couple,Zn2+/Zn,Zn2+ + e- -> Zn,,-0.7618,,CRC,',
+      '',
+      'couple,Ag+/Ag,Ag+ + e- -> Ag,,0.7996,,,',
+      'metal,X,,,1,,CRC,',
+      'couple,Cu(2+)/Cu,Cu2+ + 2e- -> Cu,,0.34,,CRC,',
+      'couple,Ni2+/Ni,Ni2+ + 2e- -> Ni,,-0.257,,CRC',
+      'couple,Pb2+/Pb,Pb2+ + 2e- -> Pb,,"-0,126",,CRC,',
+      'couple,Sn2+/Sn,Sn2+ + 2e- -> Sn,,9.5,,CRC,',
+      'electrode,SCE,,Calomel|Hg/Hg2Cl2/KCl(sat),0.2412,-0.67,"Bates, 1973",',
+      'electrode,calomel,,,0.25,,x,',
+    ].join('\n');
+    const r = importCsv(text);
+    expect(r.fileProblem).toBeUndefined();
+    expect(r.accepted.map((a) => a.line)).toEqual([3, 13]);
+    const reasons = new Map(r.rejected.map((x) => [x.line, x.reason]));
+    expect([...reasons.keys()]).toEqual([4, 5, 7, 8, 9, 10, 11, 12, 14]);
+    expect(reasons.get(4)).toMatch(/potential_V "abc" is not a number/);
+    expect(reasons.get(5)).toMatch(/charge|balance/i);
+    expect(reasons.get(7)).toMatch(/source/);
+    expect(reasons.get(8)).toMatch(/row_type "metal"/);
+    expect(reasons.get(9)).toMatch(/already given on line 3/);
+    expect(reasons.get(10)).toMatch(/7 fields; the header has 8/);
+    expect(reasons.get(11)).toMatch(/decimal comma/);
+    expect(reasons.get(12)).toMatch(/outside the plausible range/);
+    expect(reasons.get(14)).toMatch(/"calomel" was already given on line 13/);
+    expect(r.electrodes[0].aliases).toEqual(['Calomel', 'Hg/Hg2Cl2/KCl(sat)']);
+  });
+
+  it('refuses the whole file for a missing header column, an unknown column or an unclosed quote', () => {
+    expect(importCsv('').fileProblem).toMatch(/no header/);
+    expect(importCsv('row_type,key,potential_V\ncouple,a,1').fileProblem).toMatch(/lacks source/);
+    expect(importCsv(`${header},colour\n`).fileProblem).toMatch(/"colour" is not a column/);
+    expect(importCsv(`${header}\ncouple,"Cu2+/Cu,x`).fileProblem).toMatch(/never closed/);
+  });
+
+  it('reads semicolon-separated files with decimal commas and columns in another order', () => {
+    const text = 'source;potential_V;key;row_type;half_reaction\r\n"CRC; 92nd ed.";0,3419;Cu2+/Cu;couple;Cu2+ + 2e- -> Cu\r\n';
+    const r = importCsv(text);
+    expect(r.rejected).toEqual([]);
+    expect(r.couples).toEqual([{ key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.3419, source: 'CRC; 92nd ed.' }]);
+  });
+
+  it('round-trips 2,000 rows', () => {
+    const rows = manyCouples(2000);
+    const r = importCsv(exportCsv({ couples: rows, electrodes: [] }, 'big'));
+    expect(r.rejected).toEqual([]);
+    expect(r.couples).toEqual(rows);
+  });
+
+  it('round-trips any printable source and note text', () => {
+    fc.assert(
+      fc.property(fc.string({ minLength: 1, maxLength: 60 }).filter((s) => s.trim() !== '' && s === s.trim()), fc.string({ maxLength: 60 }), (source, note) => {
+        const row = { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.34, source, ...(note.trim() === '' ? {} : { note: note.trim() }) };
+        const r = importCsv(exportCsv({ couples: [row], electrodes: [] }, 't'));
+        return r.rejected.length === 0 && JSON.stringify(r.couples[0]) === JSON.stringify(row);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});

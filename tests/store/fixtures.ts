@@ -1,0 +1,47 @@
+/**
+ * Test data for the store tests: the add-in's built-in table as records, and large synthetic tables
+ * (2,000 rows and more) whose rows pass every table check.
+ */
+import { builtinTable } from '../../src/table/builtin';
+import type { CoupleRecord, ElectrodeRecord } from '../../src/table/records';
+import { type VersionedRecords, recordsOf } from '../../src/store/rows';
+
+export function builtin(): VersionedRecords {
+  return recordsOf(builtinTable());
+}
+
+/** A built-in table of another version, for update tests: one E° changed, one row dropped, one row added. */
+export function newerBuiltin(b: VersionedRecords, version = '2099.1'): VersionedRecords {
+  const couples = b.couples.map((c) => (c.key === 'Cu2+/Cu' ? { ...c, e0: 0.3400 } : c)).filter((c) => c.key !== 'Au+/Au');
+  couples.push({ key: 'Tl+/Tl', halfReaction: 'Tl+ + e- -> Tl', e0: -0.336, source: 'test data: a row new in the newer built-in table' });
+  return { version, couples, electrodes: b.electrodes };
+}
+
+/**
+ * n couple rows that all pass the table's checks: ketone → alcohol style reductions
+ * "CkH2kO + 2H+ + 2e- -> CkH(2k+2)O" for k = 1…n, with sources and notes as long as real rows'.
+ */
+export function manyCouples(n: number, source?: string): CoupleRecord[] {
+  const src = source ?? 'CRC Handbook of Chemistry and Physics, 92nd ed. (W. M. Haynes, ed., CRC Press, 2011), section 5, Electrochemical Series (P. Vanýsek)';
+  const out: CoupleRecord[] = [];
+  for (let k = 1; k <= n; k++) {
+    const ox = `C${k}H${2 * k}O`;
+    const red = `C${k}H${2 * k + 2}O`;
+    out.push({
+      key: `${ox}/${red}`,
+      halfReaction: `${ox} + 2H+ + 2e- -> ${red}`,
+      e0: Math.round((((k * 7919) % 4000) / 1000 - 2) * 10000) / 10000,
+      ...(k % 3 === 0 ? { dEdT_mV_K: Math.round((((k * 31) % 200) / 100 - 1) * 1000) / 1000 } : {}),
+      source: src,
+      ...(k % 4 === 0 ? { note: `Synthetic row ${k} for the 2,000-row storage test.` } : {}),
+    });
+  }
+  return out;
+}
+
+export function someElectrodes(): ElectrodeRecord[] {
+  return [
+    { key: 'Test-SCE', aliases: ['test calomel'], potential: 0.2412, dEdT_mV_K: -0.66, source: 'test data' },
+    { key: 'Test-AgCl-3M', aliases: [], potential: 0.210, source: 'test data' },
+  ];
+}
