@@ -1,0 +1,313 @@
+// npm run demo: the scenario of demo/scenario.mjs, evaluated through the production functions
+// bundle the way Excel's runtime runs it, printed sheet by sheet, and written to
+// demo/cellwright-demo.xlsx with live ECHEM formulas and their computed values cached.
+//
+//   node scripts/demo.mjs [--out <file.xlsx>] [--no-build] [--quiet]
+//
+// Builds dist/ first when it is missing or older than the sources (unless --no-build).
+// Exits 1 when a formula gives an error the scenario does not expect.
+import { mkdirSync, readFileSync, statSync } from 'node:fs';
+import { dirname, relative, resolve } from 'node:path';
+import ExcelJS from 'exceljs';
+import { ensureBuilt, loadBundle, ROOT } from './lib/bundle.mjs';
+import { isErrorValue, parseAddress, address } from './lib/formula.mjs';
+import { errorsOf, evaluateSheet, layoutSheet } from './lib/workbook.mjs';
+import { scenario } from '../demo/scenario.mjs';
+
+const started = process.hrtime.bigint();
+const argv = process.argv.slice(2);
+const opt = (name) => {
+  const i = argv.indexOf(name);
+  return i >= 0 ? argv[i + 1] : undefined;
+};
+const OUT = resolve(process.cwd(), opt('--out') ?? resolve(ROOT, 'demo/cellwright-demo.xlsx'));
+const QUIET = argv.includes('--quiet');
+const tty = process.stdout.isTTY && !process.env.NO_COLOR;
+const bold = (s) => (tty ? `\x1b[1m${s}\x1b[22m` : s);
+const dim = (s) => (tty ? `\x1b[2m${s}\x1b[22m` : s);
+const out = (s = '') => {
+  if (!QUIET) process.stdout.write(`${s}\n`);
+};
+
+/* ---------------------------------------------------------------------------------------- */
+/* Formatting                                                                                */
+/* ---------------------------------------------------------------------------------------- */
+
+/** A value as the terminal shows it. */
+export function formatValue(v, digits) {
+  if (v === null || v === undefined) return '';
+  if (isErrorValue(v)) return v.code;
+  if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
+  if (typeof v === 'string') return v;
+  if (v === 0) return digits !== undefined ? (0).toFixed(digits) : '0';
+  const a = Math.abs(v);
+  if (digits !== undefined && a >= 10 ** -digits && a < 1e9) return v.toFixed(digits);
+  if (a < 1e-3 || a >= 1e7) return v.toExponential(3).replace('e', 'E');
+  return String(Number(v.toPrecision(5)));
+}
+
+/** The Excel number format matching formatValue. */
+function numFmt(v, digits) {
+  if (typeof v !== 'number' || v === 0) return digits !== undefined ? (digits ? `0.${'0'.repeat(digits)}` : '0') : undefined;
+  const a = Math.abs(v);
+  if (digits !== undefined && a >= 10 ** -digits && a < 1e9) return digits ? `0.${'0'.repeat(digits)}` : '0';
+  if (a < 1e-3 || a >= 1e7) return '0.000E+00';
+  return undefined;
+}
+
+const width = (s) => [...s].length;
+const pad = (s, n) => s + ' '.repeat(Math.max(0, n - width(s)));
+const padLeft = (s, n) => ' '.repeat(Math.max(0, n - width(s))) + s;
+
+/* ---------------------------------------------------------------------------------------- */
+/* Terminal                                                                                  */
+/* ---------------------------------------------------------------------------------------- */
+
+function printSheet(laid, ev) {
+  const { sheet, cells } = laid;
+  const value = (a) => {
+    const { r, c } = parseAddress(a);
+    const cell = cells.get(a);
+    if (cell && cell.formula) {
+      const v = ev.results.get(a);
+      return Array.isArray(v) ? v[0][0] : v;
+    }
+    if (cell) return cell.value;
+    const o = ev.owner.get(a);
+    return o ? ev.results.get(o.addr)[r - o.r][c - o.c] : null;
+  };
+  out();
+  out(bold(`━━ ${sheet.name} ━━ ${sheet.title}`));
+  for (const line of sheet.intro ?? []) out(dim(`   ${line}`));
+  const LABEL = 58;
+  for (const b of laid.placed) {
+    if (b.kind === 'section') {
+      out();
+      out(bold(`   ${b.section}`));
+      if (b.text) out(`   ${b.text}`);
+    } else if (b.kind === 'text') {
+      out(dim(`   ${b.text}`));
+    } else if (b.kind === 'quantity') {
+      const a = address(b.row, 2);
+      const cell = cells.get(a);
+      const v = value(a);
+      const shown = padLeft(formatValue(v, cell.digits), 12);
+      const unit = pad(b.unit ?? '', 10);
+      const label = width(b.label) > LABEL ? `${b.label}\n${' '.repeat(LABEL + 9)}` : pad(b.label, LABEL);
+      const how = cell.formula ? `=${cell.formula}` : 'input';
+      out(`   ${pad(a, 5)}${label} ${shown}  ${unit}${dim(how)}`);
+      if (isErrorValue(v) && v.message) out(dim(`${' '.repeat(LABEL + 9)}${v.code}: ${v.message}${cell.expect ? ' (expected here)' : ''}`));
+      if (b.note) out(dim(`${' '.repeat(LABEL + 9)}${b.note}`));
+    } else if (b.kind === 'table' || b.kind === 'grid') {
+      printGrid(laid, ev, b, value);
+    }
+  }
+}
+
+function printGrid(laid, ev, b, value) {
+  const first = b.headerRow;
+  const ncols = b.kind === 'grid' ? b.cols + 1 : b.columns.length;
+  const nrows = b.rows;
+  out();
+  if (b.caption) out(bold(`   ${b.caption}`));
+  const rows = [];
+  for (let r = first; r <= first + nrows; r++) {
+    const line = [];
+    for (let c = 1; c <= ncols; c++) {
+      const a = address(r, c);
+      const cell = laid.cells.get(a);
+      let digits = cell?.digits;
+      if (digits === undefined) {
+        // a spilled value takes the digits of its anchor
+        const o = ev.owner.get(a);
+        digits = o?.digits;
+      }
+      line.push(formatValue(value(a), digits));
+    }
+    rows.push(line);
+  }
+  const widths = [];
+  for (let c = 0; c < ncols; c++) widths.push(Math.min(40, Math.max(...rows.map((l) => width(l[c])))));
+  rows.forEach((l, i) => {
+    const text = l
+      .map((s, c) => {
+        const t = width(s) > 40 ? `${[...s].slice(0, 39).join('')}…` : s;
+        const numeric = i > 0 && /^[-+]?[\d.]+(E[-+]?\d+)?$/.test(t);
+        return numeric ? padLeft(t, widths[c]) : pad(t, widths[c]);
+      })
+      .join('  ');
+    out(`   ${i === 0 ? bold(text) : text}`);
+  });
+  // the formulas of this block, with the range each one filled
+  for (const f of ev.formulas) {
+    if (f.r < first || f.r > first + nrows || f.c > ncols) continue;
+    const sp = ev.spills.get(f.addr);
+    const range = sp ? `${f.addr}:${address(f.r + sp.rows - 1, f.c + sp.cols - 1)}` : f.addr;
+    const note = sp ? ` (one formula, spilled ${sp.rows}×${sp.cols})` : '';
+    out(dim(`   ${range} =${f.formula}${note}`));
+    const v = ev.results.get(f.addr);
+    const bad = (Array.isArray(v) ? v.flat() : [v]).find(isErrorValue);
+    if (bad) out(dim(`     ${bad.code}${bad.message ? `: ${bad.message}` : ''}`));
+  }
+}
+
+/* ---------------------------------------------------------------------------------------- */
+/* Workbook                                                                                  */
+/* ---------------------------------------------------------------------------------------- */
+
+const FILL = {
+  input: { type: 'pattern', pattern: 'solid', fgColor: { argb: 'FFFFF4CC' } },
+  result: { type: 'pattern', pattern: 'solid', fgColor: { argb: 'FFE3F1E3' } },
+  section: { type: 'pattern', pattern: 'solid', fgColor: { argb: 'FFDCE6F0' } },
+};
+
+function cached(v) {
+  if (isErrorValue(v)) return { error: v.code };
+  return v;
+}
+
+function writeSheet(wb, laid, ev) {
+  const ws = wb.addWorksheet(laid.sheet.name, { views: [{ showGridLines: true }] });
+  ws.columns = [{ width: 58 }, { width: 16 }, { width: 16 }, { width: 30 }, { width: 18 }, { width: 20 }, { width: 16 }];
+  for (const cell of laid.cells.values()) {
+    const x = ws.getCell(cell.addr);
+    if (cell.formula) {
+      const v = ev.results.get(cell.addr);
+      const sp = ev.spills.get(cell.addr);
+      if (sp) {
+        const ref = `${cell.addr}:${address(cell.r + sp.rows - 1, cell.c + sp.cols - 1)}`;
+        x.value = { formula: cell.formula, result: cached(v[0][0]), shareType: 'array', ref };
+        for (let i = 0; i < sp.rows; i++)
+          for (let j = 0; j < sp.cols; j++) {
+            const y = ws.getCell(cell.r + i, cell.c + j);
+            if (i || j) y.value = cached(v[i][j]);
+            y.fill = FILL.result;
+            const f = numFmt(v[i][j], cell.digits);
+            if (f) y.numFmt = f;
+          }
+      } else {
+        x.value = { formula: cell.formula, result: cached(v) };
+        x.fill = FILL.result;
+        const f = numFmt(v, cell.digits);
+        if (f) x.numFmt = f;
+      }
+      continue;
+    }
+    x.value = cell.value;
+    switch (cell.role) {
+      case 'title':
+        x.font = { bold: true, size: 14 };
+        break;
+      case 'intro':
+      case 'text':
+        x.font = { italic: true, color: { argb: 'FF444444' } };
+        break;
+      case 'section':
+        x.font = { bold: true };
+        x.fill = FILL.section;
+        break;
+      case 'header':
+        x.font = { bold: true };
+        x.border = { bottom: { style: 'thin' } };
+        break;
+      case 'input': {
+        x.fill = FILL.input;
+        if (cell.header) x.font = { bold: true };
+        const f = numFmt(cell.value, cell.digits);
+        if (f) x.numFmt = f;
+        break;
+      }
+      case 'note':
+        x.font = { color: { argb: 'FF555555' } };
+        break;
+      default:
+    }
+  }
+  return ws;
+}
+
+function writeCover(wb, bundleInfo) {
+  const ws = wb.addWorksheet('Cover');
+  ws.columns = [{ width: 130 }];
+  let r = 1;
+  const line = (text, style = {}) => {
+    const c = ws.getCell(r++, 1);
+    c.value = text;
+    c.alignment = { wrapText: true, vertical: 'top' };
+    Object.assign(c, style);
+  };
+  const heading = (text) => {
+    r++;
+    line(text, { font: { bold: true, size: 12 } });
+  };
+  line(scenario.title, { font: { bold: true, size: 16 } });
+  line('Every company, site, line and stack named in this workbook is invented.', { font: { italic: true } });
+  heading('The scenario');
+  for (const p of scenario.summary) line(p);
+  heading('Sheets');
+  for (const s of scenario.sheets) line(`${s.name}: ${s.title}`);
+  heading('How to use this workbook');
+  for (const p of scenario.howToUse) line(p);
+  line('Yellow cells are inputs; green cells are results of ECHEM formulas.');
+  const key = ws.getCell(r - 1, 1);
+  key.fill = FILL.input;
+  heading('Cautions');
+  for (const p of scenario.cautions) line(p, { font: { color: { argb: 'FF8A1C1C' } } });
+  heading('Provenance');
+  line(`Values computed by the Cellwright ${bundleInfo.version} functions bundle (${bundleInfo.count} worksheet functions) with the built-in potential table, by "npm run demo".`);
+  return ws;
+}
+
+/* ---------------------------------------------------------------------------------------- */
+/* Main                                                                                      */
+/* ---------------------------------------------------------------------------------------- */
+
+async function main() {
+  const buildNote = argv.includes('--no-build') ? 'using dist/ as it is (--no-build)' : ensureBuilt({ quiet: QUIET });
+  const bundle = loadBundle();
+  const version = JSON.parse(readFileSync(resolve(ROOT, 'package.json'), 'utf8')).version;
+  out(bold(scenario.title));
+  out(dim(`Functions bundle: dist/functions.js, ${bundle.metadata.functions.length} functions, loaded with only a CustomFunctions global (${buildNote}).`));
+  out(dim('Every name in this scenario is invented; inputs are invented, results come from the bundle.'));
+
+  const wb = new ExcelJS.Workbook();
+  wb.creator = 'Cellwright demo';
+  writeCover(wb, { version, count: bundle.metadata.functions.length });
+
+  let formulas = 0;
+  let spilled = 0;
+  const unexpected = [];
+  const used = new Set();
+  for (const sheet of scenario.sheets) {
+    const laid = layoutSheet(sheet);
+    const ev = await evaluateSheet(laid, bundle);
+    formulas += ev.formulas.length;
+    spilled += ev.spills.size;
+    for (const f of ev.formulas) for (const m of f.formula.matchAll(/ECHEM\.([A-Z0-9]+)\(/g)) used.add(m[1]);
+    for (const e of errorsOf(laid, ev)) if (!e.expected) unexpected.push({ sheet: sheet.name, ...e });
+    printSheet(laid, ev);
+    writeSheet(wb, laid, ev);
+  }
+
+  mkdirSync(dirname(OUT), { recursive: true });
+  await wb.xlsx.writeFile(OUT);
+  const ms = Number(process.hrtime.bigint() - started) / 1e6;
+  const ids = bundle.metadata.functions.map((f) => f.id);
+  const unused = ids.filter((id) => !used.has(id));
+  const absent = [...used].filter((id) => !bundle.byId.has(id));
+  out();
+  out(bold('Summary'));
+  out(`   ${scenario.sheets.length} sheets, ${formulas} formulas (${spilled} spilled), using ${ids.length - unused.length} of the bundle's ${ids.length} ECHEM functions.`);
+  if (unused.length) out(`   Not used by the scenario: ${unused.join(', ')}.`);
+  if (absent.length) out(`   Used by the scenario but not in this bundle: ${absent.join(', ')}.`);
+  out(`   Wrote ${relative(process.cwd(), OUT) || OUT} (${Math.round(statSync(OUT).size / 1024)} kB) in ${(ms / 1000).toFixed(1)} s.`);
+  if (unexpected.length) {
+    out(bold(`   ${unexpected.length} formula(s) gave an error the scenario does not expect:`));
+    for (const e of unexpected) out(`     ${e.sheet}!${e.addr} ${e.code}${e.message ? ` (${e.message})` : ''}: =${e.formula}`);
+    process.exitCode = 1;
+  } else {
+    out('   No formula gave an unexpected error.');
+  }
+}
+
+await main();

@@ -1,0 +1,120 @@
+// Loads the production functions bundle (dist/functions.js + dist/functions.json) the way Excel's
+// runtime does: evaluated in a fresh node:vm context whose only global is a CustomFunctions
+// object, collecting the functions it associates. Calls go by id with every declared parameter
+// passed (null for omitted ones) and an invocation object appended last.
+//
+// Used by the demo (scripts/demo.mjs) and the reference generator (scripts/docs.mjs). It mirrors
+// tests/bundle/harness.ts, written in plain JavaScript so that those scripts run on bare node.
+import { existsSync, readFileSync, statSync, readdirSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { dirname, resolve, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import vm from 'node:vm';
+
+export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
+export const DIST = resolve(ROOT, 'dist');
+
+/** An Excel error value as the bundle makes it (new CustomFunctions.Error(code, message)). */
+export class FakeError {
+  constructor(code, message) {
+    this.code = code;
+    this.message = message;
+  }
+}
+
+export const ErrorCode = {
+  invalidValue: '#VALUE!',
+  notAvailable: '#N/A',
+  divisionByZero: '#DIV/0!',
+  invalidNumber: '#NUM!',
+  nullReference: '#NULL!',
+  invalidName: '#NAME?',
+  invalidReference: '#REF!',
+};
+
+/** True for an Excel error value (from the bundle or from the formula evaluator). */
+export function isError(v) {
+  return v instanceof FakeError;
+}
+
+/** Newest modification time (ms) of the files under the given directories of the project. */
+function newestSource(dirs) {
+  let newest = 0;
+  const walk = (dir) => {
+    if (!existsSync(dir)) return;
+    for (const entry of readdirSync(dir, { withFileTypes: true })) {
+      const p = join(dir, entry.name);
+      if (entry.isDirectory()) walk(p);
+      else newest = Math.max(newest, statSync(p).mtimeMs);
+    }
+  };
+  for (const d of dirs) walk(resolve(ROOT, d));
+  for (const f of ['webpack.config.cjs', 'package.json']) {
+    const p = resolve(ROOT, f);
+    if (existsSync(p)) newest = Math.max(newest, statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+/**
+ * Builds dist/ with the production build when it is missing or older than the sources
+ * (src/, functions/, data/). Returns a line describing what was done, for the caller to print.
+ * A failed rebuild over an existing dist/ keeps the old bundle and says so; a failed first build
+ * throws.
+ */
+export function ensureBuilt({ quiet = false } = {}) {
+  const js = resolve(DIST, 'functions.js');
+  const json = resolve(DIST, 'functions.json');
+  const present = existsSync(js) && existsSync(json);
+  const stale = present && newestSource(['src', 'functions', 'data']) > Math.min(statSync(js).mtimeMs, statSync(json).mtimeMs);
+  if (present && !stale) return 'using the existing production build in dist/';
+  const why = present ? 'dist/ is older than the sources' : 'dist/ has no functions bundle yet';
+  if (!quiet) process.stderr.write(`Building the functions bundle (${why}) …\n`);
+  const webpackCli = resolve(ROOT, 'node_modules/webpack-cli/bin/cli.js');
+  const r = spawnSync(process.execPath, [webpackCli, '--mode', 'production'], { cwd: ROOT, encoding: 'utf8' });
+  const ok = r.status === 0 && existsSync(js) && existsSync(json);
+  if (!ok) {
+    const tail = `${r.stdout ?? ''}${r.stderr ?? ''}`.trim().split('\n').slice(-15).join('\n');
+    if (!present) throw new Error(`the production build failed, so there is no bundle to run:\n${tail}`);
+    return `the rebuild failed (${tail.split('\n').pop()}); using the previous build in dist/`;
+  }
+  return `built dist/ (${why})`;
+}
+
+/**
+ * Evaluates dist/functions.js with nothing but a CustomFunctions global and returns
+ * { metadata, registered, call(id, ...args), byId }.
+ */
+export function loadBundle(distDir = DIST) {
+  const code = readFileSync(resolve(distDir, 'functions.js'), 'utf8');
+  const metadata = JSON.parse(readFileSync(resolve(distDir, 'functions.json'), 'utf8'));
+  const registered = new Map();
+  const CustomFunctions = {
+    Error: FakeError,
+    ErrorCode,
+    associate(idOrMap, fn) {
+      if (typeof idOrMap === 'string') registered.set(idOrMap.toUpperCase(), fn);
+      else for (const [k, v] of Object.entries(idOrMap)) registered.set(k.toUpperCase(), v);
+    },
+  };
+  const sandbox = { CustomFunctions };
+  vm.createContext(sandbox);
+  vm.runInContext(code, sandbox, { filename: 'functions.js' });
+  const byId = new Map(metadata.functions.map((f) => [f.id, f]));
+  return {
+    metadata,
+    registered,
+    byId,
+    /** Calls a function like Excel: omitted parameters null, an invocation object appended. */
+    call(id, ...args) {
+      const meta = byId.get(id);
+      const fn = registered.get(id);
+      if (!meta || !fn) throw new Error(`no function ${id} in the bundle`);
+      if (args.length > meta.parameters.length) throw new Error(`${id} takes ${meta.parameters.length} arguments`);
+      const full = [...args];
+      while (full.length < meta.parameters.length) full.push(null);
+      full.push({ functionName: id, address: 'Sheet1!A1', setResult() {}, onCanceled: null });
+      return fn(...full);
+    },
+  };
+}
