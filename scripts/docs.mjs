@@ -2,6 +2,8 @@
 //
 //   node scripts/docs.mjs [--check] [--no-build]
 //
+// Also refreshes the function table of README.md (between its functions:start/end markers).
+//
 // Sources, and nothing typed by hand about a function's behaviour:
 //   dist/functions.json           the functions, their descriptions, parameters (order, name,
 //                                 description, optional) and help URLs, as Excel reads them;
@@ -10,7 +12,8 @@
 //   docs/examples.json            the order, one example's arguments per function, see-also links;
 //   dist/functions.js             the example values and the errors, computed by the bundle
 //                                 (loaded as Excel's runtime loads it) while the reference is made.
-// --check compares the generated text with the committed files and exits 1 when they differ.
+// --check compares the generated text with the committed files (and the README's table) and
+// exits 1 when they differ.
 import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -98,18 +101,21 @@ const KIND_UNIT = {
   electrode: 'electrode key',
   species: 'formula, or g/mol',
   text: 'text',
-  textList: 'text (range)',
+  textList: 'text, a range',
 };
 
 function unitOf(arg) {
   if (arg.kind === 'number') return arg.unit || '—';
-  if (arg.kind === 'numberList') return `${arg.unit || 'numbers'} (range)`;
+  if (arg.kind === 'numberList') return `${arg.unit || 'numbers'}, a range`;
   return KIND_UNIT[arg.kind] ?? (arg.unit || '—');
 }
 
+/** An optional argument whose default is not a single value (e.g. 1 − alpha_a) says it in words. */
+const DEFAULT_IN_WORDS = 'see description';
+
 function defaultOf(arg) {
   if (!arg.optional) return 'required';
-  if (arg.default === null || arg.default === undefined) return 'none (see description)';
+  if (arg.default === null || arg.default === undefined) return DEFAULT_IN_WORDS;
   if (typeof arg.default === 'string') return `"${arg.default}"`;
   return formatNumber(arg.default);
 }
@@ -312,6 +318,39 @@ export function renderMarkdown(model) {
 }
 
 /* ---------------------------------------------------------------------------------------- */
+/* The README's function table                                                               */
+/* ---------------------------------------------------------------------------------------- */
+
+const README = resolve(ROOT, 'README.md');
+const README_START = /<!-- functions:start[^>]*-->\n/;
+const README_END = '<!-- functions:end -->';
+
+function readmeArg(p) {
+  const unit = p.unit === '—' || p.unit.split(/[ ,]/)[0] === p.name ? '' : ` (${p.unit})`;
+  if (!p.optional) return `${p.name}${unit}`;
+  return p.default === DEFAULT_IN_WORDS ? `[${p.name}${unit}]` : `[${p.name}${unit} = ${p.default}]`;
+}
+
+/** The table of every function with its arguments' units and its result, grouped as in the reference. */
+export function renderReadmeTable(model) {
+  const L = [];
+  for (const g of model.groups) {
+    L.push(`**${g.title}**`, '', '| Function | Arguments | Result |', '|---|---|---|');
+    for (const f of g.functions) L.push(`| [\`${f.id}\`](docs/functions.md#${f.anchor}) | ${mdCell(f.params.map(readmeArg).join(', '))} | ${mdCell(f.returns)} |`);
+    L.push('');
+  }
+  return L.join('\n');
+}
+
+/** README.md with its generated block replaced (the text between the two markers). */
+function withReadmeTable(readme, table) {
+  const start = README_START.exec(readme);
+  const end = readme.indexOf(README_END);
+  if (!start || end < start.index) throw new Error('README.md has no <!-- functions:start --> … <!-- functions:end --> block');
+  return `${readme.slice(0, start.index + start[0].length)}${table}${readme.slice(end)}`;
+}
+
+/* ---------------------------------------------------------------------------------------- */
 /* HTML                                                                                      */
 /* ---------------------------------------------------------------------------------------- */
 
@@ -381,7 +420,8 @@ export function renderHtml(model) {
 
 export async function generateDocs() {
   const model = await buildModel();
-  return { model, md: renderMarkdown(model), html: renderHtml(model) };
+  const readme = withReadmeTable(readFileSync(README, 'utf8'), renderReadmeTable(model));
+  return { model, md: renderMarkdown(model), html: renderHtml(model), readme };
 }
 
 function firstDifference(a, b) {
@@ -399,12 +439,13 @@ async function main() {
     const note = ensureBuilt();
     process.stderr.write(`${note}\n`);
   }
-  const { md, html, model } = await generateDocs();
+  const { md, html, readme, model } = await generateDocs();
   if (args.includes('--check')) {
     const stale = [];
     for (const [file, text] of [
       [MD, md],
       [HTML, html],
+      [README, readme],
     ]) {
       const old = existsSync(file) ? readFileSync(file, 'utf8') : '';
       if (old !== text) stale.push(`${file.slice(ROOT.length + 1)} is out of date (${firstDifference(old, text)})`);
@@ -413,12 +454,13 @@ async function main() {
       process.stderr.write(`${stale.join('\n')}\nRun "npm run docs" and commit the result.\n`);
       process.exit(1);
     }
-    process.stdout.write(`docs/functions.md and docs/functions.html are up to date (${model.count} functions).\n`);
+    process.stdout.write(`docs/functions.md, docs/functions.html and the README's function table are up to date (${model.count} functions).\n`);
     return;
   }
   writeFileSync(MD, md);
   writeFileSync(HTML, html);
-  process.stdout.write(`Wrote docs/functions.md and docs/functions.html (${model.count} functions).\n`);
+  writeFileSync(README, readme);
+  process.stdout.write(`Wrote docs/functions.md, docs/functions.html and the README's function table (${model.count} functions).\n`);
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(resolve(process.argv[1])).href) await main();

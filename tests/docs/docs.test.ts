@@ -31,7 +31,7 @@ function section(id: string): string {
 describe('docs/functions.md and docs/functions.html', () => {
   it('are what npm run docs generates now (regenerate and commit when this fails)', () => {
     const r = spawnSync(process.execPath, ['scripts/docs.mjs', '--check', '--no-build'], { cwd: ROOT, encoding: 'utf8' });
-    expect(r.stderr + r.stdout, 'run "npm run docs" and commit docs/functions.md and docs/functions.html').toMatch(/up to date/);
+    expect(r.stderr + r.stdout, 'run "npm run docs" and commit docs/functions.md and docs/functions.html').toMatch(/are up to date/);
     expect(r.status).toBe(0);
   }, 60000);
 
