@@ -9,7 +9,8 @@
  *    values from other cells, and 2-D ranges;
  *  - defaults: null (or "") in an optional argument means "use the default";
  *  - broadcasting: scalars with ranges, equal shapes element by element, a row against a column
- *    gives the full table; shapes that cannot be broadcast give one #VALUE! with a message;
+ *    gives the full table; shapes that cannot be broadcast (say 2×3 against 3×2) give one #VALUE!
+ *    whose message names each range's shape;
  *  - domain checks declared in the spec (→ #NUM!);
  *  - error mapping: NotFoundError → #N/A + message, InputError → #VALUE! + message,
  *    DomainError or a non-finite result → #NUM! (no message), an error value in an input cell
@@ -18,10 +19,50 @@
  *
  * The result is always a 2-D array (1×1 for scalar arguments), which Excel spills.
  * Nothing here throws: every failure becomes a CustomFunctions.Error value.
+ *
+ * Rules made precise by the robustness work (issue 6):
+ *  - An input error value is passed through only when Excel accepts it as a function's result
+ *    (#N/A, #VALUE!, #NUM!, #DIV/0!, #NULL!). #REF! and #NAME? may arrive from a cell but may not
+ *    be returned, so they become #VALUE! with a message naming the argument. An object that only
+ *    looks like an error (a `code` that is not an Excel error code) is not one: it is read as a
+ *    value that is neither a number nor text (#VALUE!). Look-alikes with a real code are rebuilt
+ *    as CustomFunctions.Error.
+ *  - Every message is one line of plain words, at most 300 characters: quoted user text longer
+ *    than 40 characters is shortened with "…". Style: what was wrong and what is accepted,
+ *    "Q must be a number; got \"abc\"", "unknown couple \"Xx/Yy\"; use a key … such as \"Cu2+/Cu\"".
+ *    #NUM! never carries a message (Excel shows none).
+ *  - A result text longer than Excel's 32,767 characters per cell is #VALUE! with a message.
+ *
+ * Performance (issue 5; figures in BENCHMARKS.md): scalar arguments are converted once per call;
+ * the element loop reads numbers without allocating (a number in its domain is used as it is,
+ * only other values go through the converters), calls `compute` with the arguments spread by
+ * arity, and stores numeric results and error values by separate statements so that a range of
+ * numbers stays an unboxed array of doubles. Look-ups of couple and electrode keys are memoized
+ * per table (a changed table is a new object, see context.ts), so a range of keys costs one Map
+ * look-up per cell after the first occurrence of each key.
  */
 import { DomainError, InputError, NotFoundError } from '../src/errors';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
 import { currentTable, tablePending } from './context';
+
+/* ------------------------------------------------------------------------------------------ */
+/* Built-ins, bound once                                                                       */
+/* ------------------------------------------------------------------------------------------ */
+
+// Looked up once when the bundle is evaluated: in a node:vm context (the tests, the benchmark,
+// the demo) every global look-up goes through the context's interceptor and costs ~150 ns.
+const isArray = Array.isArray;
+const isFiniteNumber = Number.isFinite;
+const isInteger = Number.isInteger;
+const abs = Math.abs;
+const floor = Math.floor;
+
+let ErrorClass: typeof CustomFunctions.Error | null = null;
+/** CustomFunctions.Error, looked up on first use (the runtime defines it before any call). */
+function errorClass(): typeof CustomFunctions.Error {
+  if (ErrorClass === null) ErrorClass = CustomFunctions.Error;
+  return ErrorClass;
+}
 
 /** What one element of a result may be before it reaches Excel. */
 export type Cell = number | string | boolean | CustomFunctions.Error;
@@ -34,13 +75,13 @@ export interface Domain {
 }
 
 export const domains = {
-  any: { test: () => true, accepts: 'any number' },
+  any: { test: (_x: number): boolean => true, accepts: 'any number' },
   positive: { test: (x: number) => x > 0, accepts: '> 0' },
   nonNegative: { test: (x: number) => x >= 0, accepts: '≥ 0' },
   nonZero: { test: (x: number) => x !== 0, accepts: '≠ 0' },
-  positiveInteger: { test: (x: number) => x >= 1 && Number.isInteger(x) && x <= 1e6, accepts: 'a whole number ≥ 1' },
-  integer: { test: (x: number) => Number.isInteger(x) && Math.abs(x) <= 1e6, accepts: 'a whole number' },
-  nonZeroInteger: { test: (x: number) => Number.isInteger(x) && x !== 0 && Math.abs(x) <= 1e6, accepts: 'a whole number ≠ 0' },
+  positiveInteger: { test: (x: number) => x >= 1 && isInteger(x) && x <= 1e6, accepts: 'a whole number ≥ 1' },
+  integer: { test: (x: number) => isInteger(x) && abs(x) <= 1e6, accepts: 'a whole number' },
+  nonZeroInteger: { test: (x: number) => isInteger(x) && x !== 0 && abs(x) <= 1e6, accepts: 'a whole number ≠ 0' },
   /** Temperatures in °C: above absolute zero (and below 1e6 °C, far beyond any solution chemistry). */
   temperature: { test: (x: number) => x > -273.15 && x < 1e6, accepts: '> −273.15 °C' },
   /** Faradaic or current efficiency as a fraction. */
@@ -49,6 +90,32 @@ export const domains = {
   unitInterval: { test: (x: number) => x > 0 && x < 1, accepts: 'a fraction in (0, 1)' },
   pH: { test: (x: number) => x >= -5 && x <= 20, accepts: 'between −5 and 20' },
 } satisfies Record<string, Domain>;
+
+/** A domain as bounds, checked inline on the hot path (no call, no boxing). */
+interface Bounds {
+  readonly lo: number;
+  readonly loIncl: boolean;
+  readonly hi: number;
+  readonly hiIncl: boolean;
+  readonly whole: boolean;
+}
+/**
+ * The built-in domains as bounds, for numbers other than 0 (0 and −0 always take the converter's
+ * path). A domain not listed here (declared elsewhere) is checked by calling its `test`.
+ */
+const BOUNDS = new Map<Domain, Bounds>([
+  [domains.any, { lo: -Infinity, loIncl: false, hi: Infinity, hiIncl: false, whole: false }],
+  [domains.positive, { lo: 0, loIncl: false, hi: Infinity, hiIncl: false, whole: false }],
+  [domains.nonNegative, { lo: 0, loIncl: true, hi: Infinity, hiIncl: false, whole: false }],
+  [domains.nonZero, { lo: -Infinity, loIncl: false, hi: Infinity, hiIncl: false, whole: false }],
+  [domains.positiveInteger, { lo: 1, loIncl: true, hi: 1e6, hiIncl: true, whole: true }],
+  [domains.integer, { lo: -1e6, loIncl: true, hi: 1e6, hiIncl: true, whole: true }],
+  [domains.nonZeroInteger, { lo: -1e6, loIncl: true, hi: 1e6, hiIncl: true, whole: true }],
+  [domains.temperature, { lo: -273.15, loIncl: false, hi: 1e6, hiIncl: false, whole: false }],
+  [domains.efficiency, { lo: 0, loIncl: false, hi: 1, hiIncl: true, whole: false }],
+  [domains.unitInterval, { lo: 0, loIncl: false, hi: 1, hiIncl: false, whole: false }],
+  [domains.pH, { lo: -5, loIncl: true, hi: 20, hiIncl: true, whole: false }],
+]);
 
 /** How an argument is read. */
 export type ArgKind =
@@ -93,21 +160,43 @@ export interface FunctionSpec {
 /* Excel errors                                                                                */
 /* ------------------------------------------------------------------------------------------ */
 
-function cfError(code: CustomFunctions.ErrorCode, message?: string): CustomFunctions.Error {
-  return message === undefined ? new CustomFunctions.Error(code) : new CustomFunctions.Error(code, message);
+/** Longest message an error value carries. */
+const MAX_MESSAGE = 300;
+/** Longest quoted user text inside a message. */
+const MAX_QUOTED = 40;
+/** Excel's limit on the characters of a text in one cell. */
+const EXCEL_MAX_TEXT = 32767;
+
+/** One line of plain words, at most MAX_MESSAGE characters, long quoted text shortened. */
+function tidyMessage(message: string): string {
+  let m = message.replace(/\s+/g, ' ').trim();
+  if (m.length > 2 * MAX_QUOTED) {
+    m = m.replace(/"([^"]*)"/g, (whole, inner: string) => (inner.length > MAX_QUOTED ? `"${inner.slice(0, MAX_QUOTED - 3)}…"` : whole));
+  }
+  if (m.length > MAX_MESSAGE) m = `${m.slice(0, MAX_MESSAGE - 1)}…`;
+  return m === '' ? 'the value cannot be used here' : m;
+}
+
+/** CustomFunctions.ErrorCode, looked up on first use. */
+let Codes: typeof CustomFunctions.ErrorCode | null = null;
+function codes(): typeof CustomFunctions.ErrorCode {
+  if (Codes === null) Codes = CustomFunctions.ErrorCode;
+  return Codes;
 }
 
 /** #N/A with a message. */
 export function notAvailable(message: string): CustomFunctions.Error {
-  return cfError(CustomFunctions.ErrorCode.notAvailable, message);
+  return new (errorClass())(codes().notAvailable, tidyMessage(message));
 }
 /** #VALUE! with a message. */
 export function invalidValue(message: string): CustomFunctions.Error {
-  return cfError(CustomFunctions.ErrorCode.invalidValue, message);
+  return new (errorClass())(codes().invalidValue, tidyMessage(message));
 }
-/** #NUM! (Excel shows no message for it). */
+let numError: CustomFunctions.Error | null = null;
+/** #NUM! (Excel shows no message for it). One shared value: it carries nothing but its code. */
 export function invalidNumber(): CustomFunctions.Error {
-  return cfError(CustomFunctions.ErrorCode.invalidNumber);
+  if (numError === null) numError = new (errorClass())(codes().invalidNumber);
+  return numError;
 }
 
 /** Maps anything thrown by the core to an Excel error value. */
@@ -115,15 +204,52 @@ export function toExcelError(e: unknown): CustomFunctions.Error {
   if (e instanceof NotFoundError) return notAvailable(e.message);
   if (e instanceof InputError) return invalidValue(e.message);
   if (e instanceof DomainError) return invalidNumber();
-  if (isErrorValue(e)) return e;
+  if (isErrorValue(e)) return asResultError(e, 'the value');
   if (e instanceof RangeError) return invalidNumber();
   const msg = e instanceof Error ? e.message : String(e);
   return invalidValue(`unexpected problem: ${msg}`);
 }
 
-/** True for an Excel error value arriving from a cell (or produced here). */
+let errorCodes: Set<string> | null = null;
+/** The codes of CustomFunctions.ErrorCode (read when first needed: the global exists by then). */
+function knownCode(code: string): boolean {
+  if (errorCodes === null) errorCodes = new Set<string>(Object.values(codes()) as string[]);
+  return errorCodes.has(code);
+}
+
+/**
+ * True for an Excel error value arriving from a cell (or produced here): a CustomFunctions.Error,
+ * or an object whose `code` is one of Excel's error codes.
+ */
 export function isErrorValue(v: unknown): v is CustomFunctions.Error {
-  return typeof v === 'object' && v !== null && !Array.isArray(v) && typeof (v as { code?: unknown }).code === 'string';
+  if (typeof v !== 'object' || v === null) return false;
+  if (v instanceof errorClass()) return true;
+  if (isArray(v)) return false;
+  const code = (v as { code?: unknown }).code;
+  return typeof code === 'string' && knownCode(code);
+}
+
+/** Error codes Excel accepts as a custom function's input but not as its result. */
+function inputOnly(code: string): boolean {
+  return code === codes().invalidReference || code === codes().invalidName;
+}
+
+/**
+ * An error value from an input cell, made fit to be returned: passed through unchanged when it is a
+ * CustomFunctions.Error Excel accepts as a result; rebuilt when it only has the shape of one;
+ * #REF! and #NAME? (input-only codes) become #VALUE! naming the argument.
+ */
+function asResultError(e: CustomFunctions.Error, name: string): CustomFunctions.Error {
+  const code = e.code as string;
+  if (inputOnly(code)) return invalidValue(`${name} comes from a cell showing ${code}`);
+  if (e instanceof errorClass()) return e;
+  const message = (e as unknown as { message?: unknown }).message;
+  const Err = errorClass();
+  if (code === codes().invalidValue || code === codes().notAvailable) {
+    const text = typeof message === 'string' && message.trim() !== '' ? message : `${name} comes from a cell showing ${code}`;
+    return new Err(code as CustomFunctions.ErrorCode, tidyMessage(text));
+  }
+  return code === codes().invalidNumber ? invalidNumber() : new Err(code as CustomFunctions.ErrorCode);
 }
 
 /* ------------------------------------------------------------------------------------------ */
@@ -135,12 +261,13 @@ const NUMERIC_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 /** Shows a value in a message the way a cell would. */
 export function show(v: unknown): string {
   if (typeof v === 'string') {
-    const t = v.length > 40 ? `${v.slice(0, 37)}…` : v;
-    return `"${t}"`;
+    const t = v.length > MAX_QUOTED ? `${v.slice(0, MAX_QUOTED - 3)}…` : v;
+    return `"${t.replace(/\s+/g, ' ')}"`;
   }
   if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   if (v === null || v === undefined) return 'an empty cell';
-  if (typeof v === 'number') return String(v);
+  if (typeof v === 'number') return isFiniteNumber(v) ? String(v) : 'a number outside the range of double-precision numbers';
+  if (isArray(v)) return 'a range inside a cell';
   return 'a value that is not a number or text';
 }
 
@@ -154,28 +281,40 @@ function isBlank(v: unknown): boolean {
  */
 type Converter = (raw: unknown) => ArgValue | CustomFunctions.Error;
 
-function numberFrom(raw: unknown, spec: ArgSpec): number | CustomFunctions.Error {
+/** Reads numeric text: trimmed, plain decimal or exponent notation; undefined when it is not. */
+function numericText(raw: string): number | undefined {
+  if (raw.length > 400) return undefined; // no number is written with more characters
+  const t = raw.trim();
+  return NUMERIC_TEXT.test(t) ? Number(t) : undefined;
+}
+
+function numberFrom(raw: unknown, spec: ArgSpec, domain: Domain | undefined = spec.domain): number | CustomFunctions.Error {
   let x: number;
   if (typeof raw === 'number') x = raw;
-  else if (typeof raw === 'string' && NUMERIC_TEXT.test(raw.trim())) x = Number(raw.trim());
-  else if (isErrorValue(raw)) return raw;
+  else if (typeof raw === 'string') {
+    const parsed = numericText(raw);
+    if (parsed === undefined) {
+      if (raw.trim() === '') return invalidValue(`${spec.name} is required; the cell is empty`);
+      return invalidValue(`${spec.name} must be a number; got ${show(raw)}`);
+    }
+    x = parsed;
+  } else if (isErrorValue(raw)) return asResultError(raw, spec.name);
   else if (isBlank(raw)) return invalidValue(`${spec.name} is required; the cell is empty`);
   else return invalidValue(`${spec.name} must be a number; got ${show(raw)}`);
-  if (!Number.isFinite(x)) return invalidNumber();
+  if (!isFiniteNumber(x)) return invalidNumber();
   if (x === 0) x = 0; // −0 → 0
-  const d = spec.domain;
-  if (d !== undefined && !d.test(x)) return invalidNumber();
+  if (domain !== undefined && !domain.test(x)) return invalidNumber();
   return x;
 }
 
 function textFrom(raw: unknown, spec: ArgSpec): string | CustomFunctions.Error {
   if (typeof raw === 'string') {
-    if (raw.trim() === '') return invalidValue(`${spec.name} is required; the cell is empty`);
     if (raw.length > 1000) return invalidValue(`${spec.name} is too long (${raw.length} characters; at most 1000)`);
+    if (raw.trim() === '') return invalidValue(`${spec.name} is required; the cell is empty`);
     return raw;
   }
-  if (typeof raw === 'number' && Number.isFinite(raw)) return String(raw);
-  if (isErrorValue(raw)) return raw;
+  if (typeof raw === 'number' && isFiniteNumber(raw)) return String(raw === 0 ? 0 : raw);
+  if (isErrorValue(raw)) return asResultError(raw, spec.name);
   if (isBlank(raw)) return invalidValue(`${spec.name} is required; the cell is empty`);
   return invalidValue(`${spec.name} must be text; got ${show(raw)}`);
 }
@@ -199,7 +338,7 @@ function makeConverter(spec: ArgSpec): Converter {
       });
     case 'coupleOrPotential':
       return withDefault((raw) => {
-        if (typeof raw === 'number' || (typeof raw === 'string' && NUMERIC_TEXT.test(raw.trim()))) return numberFrom(raw, spec);
+        if (typeof raw === 'number' || (typeof raw === 'string' && numericText(raw) !== undefined)) return numberFrom(raw, spec);
         const t = textFrom(raw, spec);
         return typeof t === 'string' ? lookUpCouple(t) : t;
       });
@@ -208,48 +347,78 @@ function makeConverter(spec: ArgSpec): Converter {
         const t = textFrom(raw, spec);
         return typeof t === 'string' ? lookUpElectrode(t) : t;
       });
-    case 'species':
+    case 'species': {
+      const massDomain = spec.domain ?? domains.positive;
       return withDefault((raw) => {
-        if (typeof raw === 'number' || (typeof raw === 'string' && NUMERIC_TEXT.test(raw.trim()))) {
-          return numberFrom(raw, { ...spec, domain: spec.domain ?? domains.positive });
-        }
+        if (typeof raw === 'number' || (typeof raw === 'string' && numericText(raw) !== undefined)) return numberFrom(raw, spec, massDomain);
         return textFrom(raw, spec);
       });
+    }
     case 'numberList':
     case 'textList':
       throw new Error('list arguments are read whole, not per element');
   }
 }
 
-function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
+/* Look-ups, memoized per table: a range of keys repeats the same few keys many times. */
+const MEMO_LIMIT = 4096;
+let memoTable: PotentialTable | null = null;
+let coupleMemo = new Map<string, CoupleRow | CustomFunctions.Error>();
+let electrodeMemo = new Map<string, ElectrodeRow | CustomFunctions.Error>();
+
+function tableForLookUp(): PotentialTable | CustomFunctions.Error {
   let table: PotentialTable;
   try {
     table = currentTable();
   } catch (e) {
     return toExcelError(e);
   }
-  const row = table.findCouple(key);
-  return row ?? notAvailable(`unknown couple "${key}"; use a key of the potential table such as "Cu2+/Cu"`);
+  if (table !== memoTable) {
+    memoTable = table;
+    coupleMemo = new Map();
+    electrodeMemo = new Map();
+  }
+  return table;
+}
+
+function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
+  const table = tableForLookUp();
+  if (isErrorValue(table)) return table;
+  let hit = coupleMemo.get(key);
+  if (hit === undefined) {
+    hit = table.findCouple(key) ?? notAvailable(`unknown couple ${show(key)}; use a key of the potential table such as "Cu2+/Cu"`);
+    if (coupleMemo.size >= MEMO_LIMIT) coupleMemo.clear();
+    coupleMemo.set(key, hit);
+  }
+  return hit;
 }
 
 function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
-  let table: PotentialTable;
-  try {
-    table = currentTable();
-  } catch (e) {
-    return toExcelError(e);
+  const table = tableForLookUp();
+  if (isErrorValue(table)) return table;
+  let hit = electrodeMemo.get(key);
+  if (hit === undefined) {
+    hit =
+      table.findElectrode(key) ??
+      notAvailable(`unknown reference electrode ${show(key)}; use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"`);
+    if (electrodeMemo.size >= MEMO_LIMIT) electrodeMemo.clear();
+    electrodeMemo.set(key, hit);
   }
-  const row = table.findElectrode(key);
-  return row ?? notAvailable(`unknown reference electrode "${key}"; use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"`);
+  return hit;
 }
 
 /** Reads a whole range as a flat list (row by row). Blank cells are skipped. */
 function readList(raw: unknown, spec: ArgSpec): number[] | string[] | CustomFunctions.Error {
   const flat: unknown[] = [];
-  if (Array.isArray(raw)) {
+  if (isArray(raw)) {
     for (const row of raw) {
-      if (Array.isArray(row)) for (const v of row) flat.push(v);
-      else flat.push(row);
+      if (isArray(row)) {
+        for (const v of row) {
+          if (isArray(v)) return invalidValue(`${spec.name} is not a range of single values`);
+          flat.push(v);
+        }
+      } else flat.push(row);
+      if (flat.length > 100000) return invalidValue(`${spec.name} has more than 100000 values; at most 100000`);
     }
   } else flat.push(raw);
   const cells = flat.filter((v) => !isBlank(v));
@@ -257,7 +426,6 @@ function readList(raw: unknown, spec: ArgSpec): number[] | string[] | CustomFunc
     if (spec.optional || spec.default !== undefined) return [];
     return invalidValue(`${spec.name} is required; the range is empty`);
   }
-  if (cells.length > 100000) return invalidValue(`${spec.name} has ${cells.length} values; at most 100000`);
   if (spec.kind === 'numberList') {
     const out: number[] = [];
     for (const v of cells) {
@@ -280,43 +448,54 @@ function readList(raw: unknown, spec: ArgSpec): number[] | string[] | CustomFunc
 /* Shapes and broadcasting                                                                     */
 /* ------------------------------------------------------------------------------------------ */
 
-interface Shaped {
+/** A range argument: its 2-D data (rows·cols > 1). Scalars and 1×1 ranges are read as values. */
+interface Range {
   readonly rows: number;
   readonly cols: number;
-  /** The 2-D data when rows·cols > 1. */
-  readonly data?: unknown[][];
-  /** The single value when 1×1 or scalar. */
-  readonly value?: unknown;
+  readonly data: readonly (readonly unknown[])[];
 }
 
-function shapeOf(raw: unknown, name: string): Shaped | CustomFunctions.Error {
-  if (!Array.isArray(raw)) return { rows: 1, cols: 1, value: raw };
+/** The shape of an argument: a Range, a single value wrapped as { value }, or an error value. */
+function shapeOf(raw: unknown[], name: string): Range | { value: unknown } | CustomFunctions.Error {
   if (raw.length === 0) return invalidValue(`${name} is an empty range`);
   let data = raw as unknown[][];
-  if (!Array.isArray(raw[0])) {
+  if (!isArray(raw[0])) {
     // a 1-D array: read it as one row
-    if (raw.some((v) => Array.isArray(v))) return invalidValue(`${name} is not a rectangular range`);
-    data = [raw as unknown[]];
+    for (let i = 0; i < raw.length; i++) if (isArray(raw[i])) return invalidValue(`${name} is not a rectangular range`);
+    data = [raw];
   }
   const rows = data.length;
-  const cols = (data[0] as unknown[]).length;
+  const cols = data[0].length;
   if (cols === 0) return invalidValue(`${name} is an empty range`);
   for (let r = 1; r < rows; r++) {
     const row = data[r];
-    if (!Array.isArray(row) || row.length !== cols) return invalidValue(`${name} is not a rectangular range`);
+    if (!isArray(row) || row.length !== cols) return invalidValue(`${name} is not a rectangular range`);
   }
-  if (rows === 1 && cols === 1) return { rows: 1, cols: 1, value: data[0][0] };
+  if (rows === 1 && cols === 1) return { value: data[0][0] };
   return { rows, cols, data };
 }
 
-function finishCell(v: Cell): Cell {
-  if (typeof v === 'number') {
-    if (!Number.isFinite(v)) return invalidNumber();
-    return v === 0 ? 0 : v;
-  }
-  if (typeof v === 'string' || typeof v === 'boolean') return v;
-  if (isErrorValue(v)) return v;
+/** A result element that is not a finite number: checked and made fit for a cell. */
+function finishOther(v: unknown): Cell {
+  if (typeof v === 'number') return isFiniteNumber(v) ? (v === 0 ? 0 : v) : invalidNumber();
+  if (typeof v === 'string') return v.length <= EXCEL_MAX_TEXT ? v : invalidValue(`the result is a text of ${v.length} characters; a cell holds at most ${EXCEL_MAX_TEXT}`);
+  if (typeof v === 'boolean') return v;
+  if (isErrorValue(v)) return asResultError(v, 'the result');
   return invalidValue('unexpected problem: a result that is not a number, text or logical value');
+}
+
+/** Calls compute with the arguments spread (no spread operator on the hot path for up to 6). */
+function apply(compute: FunctionSpec['compute'], n: number, a: unknown[]): Cell | Cell[] {
+  switch (n) {
+    case 0: return compute();
+    case 1: return compute(a[0]);
+    case 2: return compute(a[0], a[1]);
+    case 3: return compute(a[0], a[1], a[2]);
+    case 4: return compute(a[0], a[1], a[2], a[3]);
+    case 5: return compute(a[0], a[1], a[2], a[3], a[4]);
+    case 6: return compute(a[0], a[1], a[2], a[3], a[4], a[5]);
+    default: return compute(...a);
+  }
 }
 
 /* ------------------------------------------------------------------------------------------ */
@@ -330,88 +509,193 @@ export type WorksheetFunction = (...args: any[]) => WorksheetResult;
 /** Every compiled function, by id, in declaration order (for tests, docs and the demo). */
 export const registry = new Map<string, { spec: FunctionSpec; fn: WorksheetFunction }>();
 
+/** Most cells a result may have. */
+const MAX_CELLS = 4_000_000;
+
+/** How the hot path checks a number argument: bounds inline, or the domain's own test. */
+interface NumberCheck {
+  readonly bounds: Bounds | null;
+  readonly test: (x: number) => boolean;
+}
+
+/**
+ * True when x (finite, not 0) is in the domain. Kept small so that it is inlined into the loops.
+ */
+function inDomain(check: NumberCheck, x: number): boolean {
+  const b = check.bounds;
+  if (b === null) return check.test(x);
+  return (x > b.lo || (b.loIncl && x === b.lo)) && (x < b.hi || (b.hiIncl && x === b.hi)) && (!b.whole || floor(x) === x);
+}
+
+/**
+ * compute with every argument but one fixed: (x) => compute(a0, …, x, …). One closure per call of
+ * a worksheet function; the fixed arguments are read once, not once per element.
+ */
+function bindAt(compute: FunctionSpec['compute'], n: number, k: number, vals: unknown[]): (x: unknown) => Cell | Cell[] {
+  const a0 = vals[0];
+  const a1 = vals[1];
+  const a2 = vals[2];
+  const a3 = vals[3];
+  const a4 = vals[4];
+  switch (n * 8 + k) {
+    case 8: return (x) => compute(x);
+    case 16: return (x) => compute(x, a1);
+    case 17: return (x) => compute(a0, x);
+    case 24: return (x) => compute(x, a1, a2);
+    case 25: return (x) => compute(a0, x, a2);
+    case 26: return (x) => compute(a0, a1, x);
+    case 32: return (x) => compute(x, a1, a2, a3);
+    case 33: return (x) => compute(a0, x, a2, a3);
+    case 34: return (x) => compute(a0, a1, x, a3);
+    case 35: return (x) => compute(a0, a1, a2, x);
+    case 40: return (x) => compute(x, a1, a2, a3, a4);
+    case 41: return (x) => compute(a0, x, a2, a3, a4);
+    case 42: return (x) => compute(a0, a1, x, a3, a4);
+    case 43: return (x) => compute(a0, a1, a2, x, a4);
+    case 44: return (x) => compute(a0, a1, a2, a3, x);
+    default: {
+      const args = vals.slice();
+      return (x) => {
+        args[k] = x;
+        return apply(compute, n, args);
+      };
+    }
+  }
+}
+
 /** Compiles a spec into the function Excel calls. */
 export function worksheet(spec: FunctionSpec): WorksheetFunction {
   const n = spec.args.length;
-  const converters: Array<Converter | null> = spec.args.map((a) =>
-    a.kind === 'numberList' || a.kind === 'textList' ? null : makeConverter(a),
-  );
+  const names = spec.args.map((a) => a.name);
+  const isList = spec.args.map((a) => a.kind === 'numberList' || a.kind === 'textList');
+  const converters: Array<Converter | null> = spec.args.map((a, i) => (isList[i] ? null : makeConverter(a)));
+  /** For number arguments, the check of the fast path (a number in the domain is used as it is). */
+  const checks: Array<NumberCheck | null> = spec.args.map((a) => {
+    if (a.kind !== 'number') return null;
+    const d = a.domain ?? domains.any;
+    return { bounds: BOUNDS.get(d) ?? null, test: d.test };
+  });
   const width = spec.rowResult ?? 0;
+  const compute = spec.compute;
+
+  /** Converts one element of argument i. */
+  const read = (i: number, raw: unknown): unknown => {
+    const check = checks[i];
+    if (check !== null && typeof raw === 'number' && raw - raw === 0 && raw !== 0 && inDomain(check, raw)) return raw;
+    return converters[i]!(raw);
+  };
+
+  /** One result element (width 0) from converted arguments. */
+  const computeCell = (args: unknown[]): Cell => {
+    try {
+      const v = apply(compute, n, args);
+      if (typeof v === 'number' && v - v === 0) return v === 0 ? 0 : v;
+      return finishOther(v);
+    } catch (e) {
+      return toExcelError(e);
+    }
+  };
+
+  /** One result row (width > 0) from converted arguments. */
+  const computeRow = (args: unknown[]): Cell[] => {
+    try {
+      const v = apply(compute, n, args);
+      if (isArray(v)) {
+        if (v.length !== width) return fillRow(invalidValue('unexpected problem: wrong result width'), width);
+        return v.map(finishOther);
+      }
+      return fillRow(finishOther(v), width);
+    } catch (e) {
+      return fillRow(toExcelError(e), width);
+    }
+  };
 
   const evaluate = (raws: unknown[]): Cell[][] => {
     const vals: unknown[] = new Array(n);
-    const shapes: Array<Shaped | null> = new Array(n);
-    let rows = 1;
-    let cols = 1;
+    // 1. single values (and 1×1 ranges): the common per-cell path, no shapes needed
+    let ranges: Array<Range | null> | null = null;
     let scalarError: CustomFunctions.Error | null = null;
-    // 1. read list arguments whole, shape the others, convert scalars once
     for (let i = 0; i < n; i++) {
-      const a = spec.args[i];
-      const conv = converters[i];
-      if (conv === null) {
-        const list = readList(raws[i], a);
+      let raw = raws[i];
+      if (isList[i]) {
+        const list = readList(raw, spec.args[i]);
         if (isErrorValue(list)) return [[list]];
         vals[i] = list;
-        shapes[i] = null;
         continue;
       }
-      const sh = shapeOf(raws[i], a.name);
-      if (isErrorValue(sh)) return [[sh]];
-      if (sh.data === undefined) {
-        const v = conv(sh.value);
-        if (isErrorValue(v) && scalarError === null) scalarError = v;
-        vals[i] = v;
-        shapes[i] = null;
-      } else {
-        shapes[i] = sh;
-        if (sh.rows !== 1) {
-          if (rows !== 1 && rows !== sh.rows) return [[shapeMismatch(spec, raws)]];
-          rows = sh.rows;
-        }
-        if (sh.cols !== 1) {
-          if (cols !== 1 && cols !== sh.cols) return [[shapeMismatch(spec, raws)]];
-          cols = sh.cols;
+      if (isArray(raw)) {
+        const row0 = raw[0];
+        if (raw.length === 1 && isArray(row0) && row0.length === 1) raw = row0[0];
+        else {
+          const sh = shapeOf(raw, names[i]);
+          if (isErrorValue(sh)) return [[sh]];
+          if ('value' in sh) raw = sh.value;
+          else {
+            if (ranges === null) ranges = new Array<Range | null>(n).fill(null);
+            ranges[i] = sh;
+            continue;
+          }
         }
       }
+      const v = read(i, raw);
+      if (scalarError === null && isErrorValue(v)) scalarError = v;
+      vals[i] = v;
     }
-    // 2. all scalar: one computation
-    if (rows === 1 && cols === 1) {
-      if (scalarError !== null) return width ? [fillRow(scalarError, width)] : [[scalarError]];
-      return [width ? computeOne(vals) : [computeCell(vals)]];
+    if (ranges === null) {
+      if (scalarError !== null) return [width ? fillRow(scalarError, width) : [scalarError]];
+      return [width ? computeRow(vals) : [computeCell(vals)]];
+    }
+
+    // 2. the broadcast shape
+    let rows = 1;
+    let cols = 1;
+    for (let i = 0; i < n; i++) {
+      const sh = ranges[i];
+      if (sh === null) continue;
+      if (sh.rows !== 1) {
+        if (rows !== 1 && rows !== sh.rows) return [[shapeMismatch(spec, raws, isList)]];
+        rows = sh.rows;
+      }
+      if (sh.cols !== 1) {
+        if (cols !== 1 && cols !== sh.cols) return [[shapeMismatch(spec, raws, isList)]];
+        cols = sh.cols;
+      }
     }
     if (width && cols !== 1) {
       return [[invalidValue(`${spec.id} gives ${width} values per result; give its arguments as single columns, not ${rows}×${cols} ranges`)]];
     }
-    if (rows * cols > 4_000_000) return [[invalidValue(`the result would have ${rows * cols} cells; at most 4000000`)]];
-    // 3. broadcast
+    if (rows * cols > MAX_CELLS) return [[invalidValue(`the result would have ${rows * cols} cells; at most ${MAX_CELLS}`)]];
+
     const out: Cell[][] = new Array(rows);
     if (scalarError !== null) {
-      for (let r = 0; r < rows; r++) out[r] = width ? fillRow(scalarError, width) : fillRow(scalarError, cols);
+      for (let r = 0; r < rows; r++) out[r] = fillRow(scalarError, width || cols);
       return out;
     }
-    const args: unknown[] = vals.slice();
-    // rangeIdx: the arguments that vary, with their data and whether they vary by row / by column
-    const rangeIdx: number[] = [];
-    for (let i = 0; i < n; i++) if (shapes[i] !== null) rangeIdx.push(i);
-    const m = rangeIdx.length;
-    const rData: unknown[][][] = rangeIdx.map((i) => shapes[i]!.data!);
-    const rByRow: boolean[] = rangeIdx.map((i) => shapes[i]!.rows !== 1);
-    const rByCol: boolean[] = rangeIdx.map((i) => shapes[i]!.cols !== 1);
-    const rConv: Converter[] = rangeIdx.map((i) => converters[i]!);
+
+    // 3. broadcast: the arguments that vary, with their data and whether they vary by row / column
+    const idx: number[] = [];
+    for (let i = 0; i < n; i++) if (ranges[i] !== null) idx.push(i);
+    const m = idx.length;
+    if (m === 1 && !width) return broadcastOne(idx[0], ranges[idx[0]]!, vals, rows, cols, out);
+    const rData = idx.map((i) => ranges![i]!.data);
+    const rByRow = idx.map((i) => ranges![i]!.rows !== 1);
+    const rByCol = idx.map((i) => ranges![i]!.cols !== 1);
     for (let r = 0; r < rows; r++) {
       const line: Cell[] = width ? [] : new Array(cols);
       for (let c = 0; c < cols; c++) {
         let bad: CustomFunctions.Error | null = null;
-        for (let k = 0; k < m; k++) {
-          const raw = rData[k][rByRow[k] ? r : 0][rByCol[k] ? c : 0];
-          const v = rConv[k](raw);
-          if (bad === null && isErrorValue(v)) bad = v;
-          args[rangeIdx[k]] = v;
+        for (let j = 0; j < m; j++) {
+          const k = idx[j];
+          const v = read(k, rData[j][rByRow[j] ? r : 0][rByCol[j] ? c : 0]);
+          if (bad === null && typeof v === 'object' && v !== null && isErrorValue(v)) bad = v;
+          vals[k] = v;
         }
-        if (width) {
-          out[r] = bad !== null ? fillRow(bad, width) : computeOne(args);
-        } else {
-          line[c] = bad !== null ? bad : computeCell(args);
+        if (width) out[r] = bad !== null ? fillRow(bad, width) : computeRow(vals);
+        else if (bad !== null) line[c] = bad;
+        else {
+          const v = computeCell(vals);
+          if (typeof v === 'number') line[c] = v;
+          else line[c] = v;
         }
       }
       if (!width) out[r] = line;
@@ -419,61 +703,62 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     return out;
   };
 
-  const computeOne = (args: unknown[]): Cell[] => {
-    try {
-      const v = spec.compute(...args);
-      if (Array.isArray(v)) {
-        const row = v.map(finishCell);
-        return width && row.length !== width ? fillRow(invalidValue('unexpected problem: wrong result width'), width) : row;
-      }
-      return width ? fillRow(finishCell(v), width) : [finishCell(v)];
-    } catch (e) {
-      const err = toExcelError(e);
-      return width ? fillRow(err, width) : [err];
-    }
-  };
-
-  const compute = spec.compute;
-  const computeCell = (args: unknown[]): Cell => {
-    try {
-      let v: Cell | Cell[];
-      switch (n) {
-        case 1: v = compute(args[0]); break;
-        case 2: v = compute(args[0], args[1]); break;
-        case 3: v = compute(args[0], args[1], args[2]); break;
-        case 4: v = compute(args[0], args[1], args[2], args[3]); break;
-        case 5: v = compute(args[0], args[1], args[2], args[3], args[4]); break;
-        default: v = compute(...args);
-      }
-      if (typeof v === 'number') return Number.isFinite(v) ? (v === 0 ? 0 : v) : invalidNumber();
-      return finishCell(v as Cell);
-    } catch (e) {
-      return toExcelError(e);
-    }
-  };
-
-  const fn: WorksheetFunction = (...raws: unknown[]) => {
-    try {
-      if (spec.usesTable) {
-        const pending = tablePending();
-        if (pending !== null) {
-          return pending.then(
-            () => safeEvaluate(raws),
-            () => safeEvaluate(raws),
-          );
+  /**
+   * The hot loop: one argument varies over a range (a column of Q, a range of keys, …), the
+   * others are converted once and bound. A number in the domain goes straight to compute; numeric
+   * results and other cells are stored by separate statements so that a numeric row stays an
+   * unboxed array of doubles.
+   */
+  const broadcastOne = (k: number, range: Range, vals: unknown[], rows: number, cols: number, out: Cell[][]): Cell[][] => {
+    const data = range.data;
+    const byRow = range.rows !== 1;
+    const byCol = range.cols !== 1;
+    const check = checks[k];
+    const conv = converters[k]!;
+    const f = bindAt(compute, n, k, vals);
+    for (let r = 0; r < rows; r++) {
+      const src = data[byRow ? r : 0];
+      const line: Cell[] = new Array(cols);
+      for (let c = 0; c < cols; c++) {
+        const raw = src[byCol ? c : 0];
+        let v: unknown;
+        if (check !== null && typeof raw === 'number' && raw - raw === 0 && raw !== 0 && inDomain(check, raw)) v = raw;
+        else {
+          v = conv(raw);
+          if (typeof v === 'object' && v !== null && isErrorValue(v)) {
+            line[c] = v;
+            continue;
+          }
         }
+        let y: unknown;
+        try {
+          y = f(v);
+        } catch (e) {
+          line[c] = toExcelError(e);
+          continue;
+        }
+        if (typeof y === 'number' && y - y === 0 && y !== 0) line[c] = y;
+        else line[c] = finishOther(y);
       }
-      return evaluate(raws);
-    } catch (e) {
-      return [[toExcelError(e)]];
+      out[r] = line;
     }
+    return out;
   };
+
   const safeEvaluate = (raws: unknown[]): Cell[][] => {
     try {
       return evaluate(raws);
     } catch (e) {
       return [[toExcelError(e)]];
     }
+  };
+
+  const fn: WorksheetFunction = (...raws: unknown[]) => {
+    if (spec.usesTable) {
+      const pending = tablePending();
+      if (pending !== null) return pending.then(() => safeEvaluate(raws), () => safeEvaluate(raws));
+    }
+    return safeEvaluate(raws);
   };
   registry.set(spec.id, { spec, fn });
   return fn;
@@ -486,15 +771,15 @@ function fillRow(v: Cell, width: number): Cell[] {
 }
 
 function dims(raw: unknown): string {
-  if (!Array.isArray(raw)) return '1×1';
+  if (!isArray(raw)) return '1×1';
   const rows = raw.length;
-  const cols = Array.isArray(raw[0]) ? (raw[0] as unknown[]).length : raw.length;
-  return Array.isArray(raw[0]) ? `${rows}×${cols}` : `1×${rows}`;
+  const cols = isArray(raw[0]) ? (raw[0] as unknown[]).length : raw.length;
+  return isArray(raw[0]) ? `${rows}×${cols}` : `1×${rows}`;
 }
 
-function shapeMismatch(spec: FunctionSpec, raws: unknown[]): CustomFunctions.Error {
+function shapeMismatch(spec: FunctionSpec, raws: unknown[], isList: readonly boolean[]): CustomFunctions.Error {
   const parts = spec.args
-    .map((a, i) => (Array.isArray(raws[i]) && a.kind !== 'numberList' && a.kind !== 'textList' ? `${a.name} is ${dims(raws[i])}` : null))
+    .map((a, i) => (isArray(raws[i]) && !isList[i] ? `${a.name} is ${dims(raws[i])}` : null))
     .filter((s): s is string => s !== null);
   return invalidValue(
     `ranges of different shapes cannot be combined (${parts.join(', ')}); give ranges of the same size, or a single row with a single column`,
