@@ -103,7 +103,7 @@ function schema1Checksum(basedOn: string, couples: unknown, electrodes: unknown)
  * Syntax: writeStoredText(copy)
  */
 export function writeStoredText(copy: WorkbookCopy): string {
-  tableOfCopy(copy);
+  const table = tableOfCopy(copy);
   const doc = {
     format: STORED_FORMAT,
     schema: STORED_SCHEMA,
@@ -122,7 +122,22 @@ export function writeStoredText(copy: WorkbookCopy): string {
       `the table would take ${text.length.toLocaleString('en-US')} characters in the workbook, more than the ${MAX_STORED_CHARS.toLocaleString('en-US')} Cellwright allows; remove rows or shorten notes`,
     );
   }
+  // What this text reads as is known now: remember it, so reading it back does not check it again.
+  const parsed = JSON.parse(text) as { couples: CoupleRecord[]; electrodes: ElectrodeRecord[] };
+  lastRead = { text, result: { ok: true, copy: { ...copy, couples: parsed.couples, electrodes: parsed.electrodes }, table, checksum: doc.checksum, schema: STORED_SCHEMA } };
   return text;
+}
+
+/**
+ * The last text written or read and what it reads as. Reading is deterministic for schema 2 (schema 1
+ * depends on the built-in table, so it is not remembered), and tables of thousands of rows take a
+ * noticeable time to check, so the same text is not checked twice in a row.
+ */
+let lastRead: { text: string; result: StoredRead } | null = null;
+
+/** Forgets the remembered text (tests measure a first read with it; a new runtime starts without it). */
+export function forgetLastRead(): void {
+  lastRead = null;
 }
 
 /** The schema-1 text of a copy (kept for tests of the upgrade path and for reading old workbooks' exports). */
@@ -179,6 +194,13 @@ function checkKeyLists(name: string, x: unknown, problems: string[]): KeyLists {
  * Example: readStoredText(writeStoredText(copy), builtin).ok → true
  */
 export function readStoredText(text: unknown, builtin: VersionedRecords): StoredRead {
+  if (lastRead !== null && text === lastRead.text) return lastRead.result;
+  const result = readUncached(text, builtin);
+  if (typeof text === 'string' && result.ok && result.schema === STORED_SCHEMA) lastRead = { text, result };
+  return result;
+}
+
+function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
   if (typeof text !== 'string') return fail('not-ours', `the stored value is a ${text === null ? 'null' : typeof text}, not the text Cellwright writes`);
   if (text.trim() === '') return fail('empty', 'the stored table is empty');
   if (text.length > MAX_READ_CHARS) return fail('too-large', `the stored table is ${text.length.toLocaleString('en-US')} characters long, more than Cellwright reads`);

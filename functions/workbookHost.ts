@@ -1,0 +1,139 @@
+/**
+ * The channel between the task pane and the worksheet functions.
+ *
+ * In Excel's shared runtime the page loads functions.js and taskpane.js as two bundles with separate
+ * module instances, so the pane cannot reach functions/context.ts by import. The functions bundle
+ * therefore puts one narrow object on globalThis:
+ *
+ *   globalThis.cellwrightFunctionsHost = {
+ *     apiVersion: 1,
+ *     useStoredValue(value) → status   // the functions use this stored value from now on:
+ *                                      //   null/undefined → the built-in table;
+ *                                      //   a stored text → read with the same reader as at start-up
+ *                                      //   (src/store/stored.ts); unreadable → #N/A with the reason.
+ *     status() → status                // what the functions use now
+ *   }
+ *
+ * The pane passes the value it just wrote or read, never a table object, so the functions check it
+ * themselves and both sides agree on what the workbook holds. Nothing else crosses the channel; the
+ * caller recalculates afterwards (functions/workbookStore.ts, recalculateAll).
+ */
+import { recordsOf } from '../src/store/rows';
+import { builtinChecksum, readStoredText } from '../src/store/stored';
+import { builtinTable } from '../src/table/builtin';
+import { type TableInUse, beginTableLoad, setTableInUse, tableInUse, tablePending } from './context';
+
+export interface FunctionsHostStatus {
+  /** loading: the workbook's table is being read at start-up (table look-ups wait). */
+  readonly state: 'loading' | 'builtin' | 'workbook' | 'unreadable';
+  /** Built-in version in use, or the version the workbook's table is based on. */
+  readonly version?: string;
+  /** The workbook table's revision. */
+  readonly revision?: number;
+  /** "sha256:…" of the table in use. */
+  readonly checksum?: string;
+  readonly couples?: number;
+  readonly electrodes?: number;
+  /** Why the workbook's table could not be read (state "unreadable"). */
+  readonly reason?: string;
+}
+
+export interface CellwrightFunctionsHost {
+  readonly apiVersion: 1;
+  useStoredValue(value: unknown): FunctionsHostStatus;
+  status(): FunctionsHostStatus;
+}
+
+declare global {
+  // eslint-disable-next-line no-var
+  var cellwrightFunctionsHost: CellwrightFunctionsHost | undefined;
+}
+
+/** Longest reason put into an #N/A message (the whole message stays well under 300 characters). */
+const MAX_REASON = 200;
+
+let details: { revision?: number; checksum?: string } = {};
+/** The stored value the table in use came from (undefined before any was read). */
+let lastValue: unknown = undefined;
+/** Counts changes of the table in use; a start-up load that finishes after a newer change is dropped. */
+let generation = 0;
+
+function shorten(reason: string): string {
+  const one = reason.replace(/\s+/g, ' ').trim();
+  return one.length > MAX_REASON ? `${one.slice(0, MAX_REASON - 1)}…` : one;
+}
+
+/**
+ * What a stored value means for the functions (null/undefined: the built-in table). Also remembers the
+ * revision and checksum for status().
+ */
+export function tableForStoredValue(value: unknown): TableInUse {
+  const builtin = builtinTable();
+  lastValue = value ?? null;
+  if (value === null || value === undefined) {
+    details = { checksum: builtinChecksum(recordsOf(builtin)) };
+    return { kind: 'builtin', table: builtin };
+  }
+  const read = readStoredText(value, recordsOf(builtin));
+  if (!read.ok) {
+    details = {};
+    return { kind: 'unreadable', reason: shorten(read.problem.message) };
+  }
+  details = { revision: read.copy.revision, checksum: read.checksum };
+  return { kind: 'workbook', table: read.table };
+}
+
+/** The stored value the table in use came from (null: none, the built-in table; undefined: not read yet). */
+export function lastStoredValue(): unknown {
+  return lastValue;
+}
+
+export function hostStatus(): FunctionsHostStatus {
+  if (tablePending() !== null) return { state: 'loading' };
+  const t = tableInUse();
+  if (t.kind === 'unreadable') return { state: 'unreadable', reason: t.reason };
+  if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinChecksum(recordsOf(t.table)) };
+  return {
+    state: t.kind,
+    version: t.table.version,
+    ...(t.kind === 'workbook' ? { revision: details.revision } : {}),
+    checksum: details.checksum,
+    couples: t.table.couples.length,
+    electrodes: t.table.electrodes.length,
+  };
+}
+
+/** Makes the functions use a stored value now (see the channel above). */
+export function useStoredValue(value: unknown): FunctionsHostStatus {
+  generation++;
+  setTableInUse(tableForStoredValue(value));
+  return hostStatus();
+}
+
+/**
+ * Starts reading the workbook's table: table look-ups wait for `read` (functions/context.ts). The
+ * result is dropped when the pane has set a table in the meantime. A failed read makes the table
+ * unreadable with the failure's message: the functions answer #N/A rather than use the built-in table.
+ * Returns the load's generation (see isCurrent) and a promise that settles when the load has.
+ */
+export function startTableLoad(read: Promise<unknown>): { readonly generation: number; readonly done: Promise<void> } {
+  const mine = ++generation;
+  const load = read.then(
+    (value): TableInUse => (generation === mine ? tableForStoredValue(value) : tableInUse()),
+    (e: unknown): TableInUse =>
+      generation === mine ? { kind: 'unreadable', reason: shorten(`reading it failed: ${e instanceof Error ? e.message : String(e)}`) } : tableInUse(),
+  );
+  return { generation: mine, done: beginTableLoad(load) };
+}
+
+/** True while nothing has changed the table in use since the load or change of that generation. */
+export function isCurrent(g: number): boolean {
+  return generation === g;
+}
+
+/** Puts the channel on globalThis (once). */
+export function installFunctionsHost(): CellwrightFunctionsHost {
+  const host: CellwrightFunctionsHost = Object.freeze({ apiVersion: 1 as const, useStoredValue, status: hostStatus });
+  globalThis.cellwrightFunctionsHost = host;
+  return host;
+}

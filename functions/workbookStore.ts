@@ -1,0 +1,120 @@
+/**
+ * Where the workbook keeps its own potential table, and the only code that reads or writes it.
+ *
+ * The table is one text (src/store/stored.ts) in the workbook's settings for this add-in,
+ * `context.workbook.settings`, key "cellwright.potentialTable" (ExcelApi 1.4). DEVELOPERS.md ("Where the
+ * workbook's table is stored") explains the choice. Both bundles use this module: functions/runtime.ts
+ * reads the table at start-up; the task pane reads, writes, removes it and asks for recalculation.
+ *
+ * Writes never lose someone else's table silently. A writer says which stored value it last saw; the
+ * write goes ahead only when the workbook still holds exactly that value, and is read back afterwards.
+ * When the value changed in between (another pane, another co-author), nothing is written and the caller
+ * gets the value that is there now; when a write was itself overwritten at the same moment, the caller is
+ * told that too. A stored value that cannot be read is never written over except by an explicit reset
+ * that names the exact value it replaces.
+ */
+import { type WorkbookCopy } from '../src/store/copy';
+import type { VersionedRecords } from '../src/store/rows';
+import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } from '../src/store/stored';
+
+/** The settings key of the stored table. */
+export const TABLE_SETTING_KEY = 'cellwright.potentialTable';
+
+/** What the workbook holds. `raw` is the stored value exactly as read (for conflict checks and export). */
+export type StoredState =
+  | { readonly kind: 'none'; readonly raw: null }
+  | { readonly kind: 'readable'; readonly raw: string; readonly read: Extract<StoredRead, { ok: true }> }
+  | { readonly kind: 'unreadable'; readonly raw: unknown; readonly problem: StoredProblem };
+
+/** Reads the stored value (null when the workbook has none). */
+export async function readStoredValue(): Promise<unknown> {
+  return Excel.run(async (context) => {
+    const item = context.workbook.settings.getItemOrNullObject(TABLE_SETTING_KEY);
+    item.load('value');
+    await context.sync();
+    return item.isNullObject ? null : item.value;
+  });
+}
+
+/** Interprets a stored value. */
+export function interpret(raw: unknown, builtin: VersionedRecords): StoredState {
+  if (raw === null || raw === undefined) return { kind: 'none', raw: null };
+  const read = readStoredText(raw, builtin);
+  if (read.ok) return { kind: 'readable', raw: raw as string, read };
+  return { kind: 'unreadable', raw, problem: read.problem };
+}
+
+/** Reads and interprets what the workbook holds. */
+export async function readWorkbookTable(builtin: VersionedRecords): Promise<StoredState> {
+  return interpret(await readStoredValue(), builtin);
+}
+
+/** True when two stored values are the same (texts compared exactly; other values by their JSON). */
+export function sameStoredValue(a: unknown, b: unknown): boolean {
+  if (a === null || a === undefined) return b === null || b === undefined;
+  if (typeof a === 'string' || typeof b === 'string') return a === b;
+  try {
+    return JSON.stringify(a) === JSON.stringify(b);
+  } catch {
+    return false;
+  }
+}
+
+export type WriteOutcome =
+  /** Written and read back unchanged. */
+  | { readonly kind: 'written'; readonly state: StoredState }
+  /** Nothing written: the workbook no longer holds the value the caller saw. `state` is what it holds now. */
+  | { readonly kind: 'conflict'; readonly state: StoredState }
+  /** Written, but another writer replaced it at the same moment. `state` is what the workbook holds now. */
+  | { readonly kind: 'overwritten'; readonly state: StoredState };
+
+/**
+ * Writes a copy of the table, as the next revision after `seen` (the stored value the caller last read:
+ * null when the workbook had no table). `copy.revision` is ignored: the revision written is the seen
+ * one + 1. Throws ChangeError when the copy cannot be stored (too large, rows not usable).
+ */
+export async function writeCopy(copy: WorkbookCopy, seen: unknown, builtin: VersionedRecords, now: Date = new Date()): Promise<WriteOutcome> {
+  const seenState = interpret(seen, builtin);
+  const revision = (seenState.kind === 'readable' ? seenState.read.copy.revision : 0) + 1;
+  const text = writeStoredText({ ...copy, revision, changedAt: now.toISOString() });
+  return replaceValue(seen, text, builtin);
+}
+
+/** Removes the workbook's table (reset to the built-in table), when the workbook still holds `seen`. */
+export async function removeTable(seen: unknown, builtin: VersionedRecords): Promise<WriteOutcome> {
+  return replaceValue(seen, null, builtin);
+}
+
+async function replaceValue(seen: unknown, next: string | null, builtin: VersionedRecords): Promise<WriteOutcome> {
+  const before = await Excel.run(async (context) => {
+    const settings = context.workbook.settings;
+    const item = settings.getItemOrNullObject(TABLE_SETTING_KEY);
+    item.load('value');
+    await context.sync();
+    const current = item.isNullObject ? null : item.value;
+    if (!sameStoredValue(current, seen)) return { changed: true as const, current };
+    if (next === null) {
+      if (!item.isNullObject) item.delete();
+    } else {
+      settings.add(TABLE_SETTING_KEY, next);
+    }
+    await context.sync();
+    return { changed: false as const, current };
+  });
+  if (before.changed) return { kind: 'conflict', state: interpret(before.current, builtin) };
+  const after = await readStoredValue();
+  const state = interpret(after, builtin);
+  return sameStoredValue(after, next) ? { kind: 'written', state } : { kind: 'overwritten', state };
+}
+
+/**
+ * Recalculates every formula in every open workbook, so each cell that uses the table shows the table
+ * now in use: `application.calculate(Excel.CalculationType.full)` (ExcelApi 1.1). It costs one full
+ * recalculation, the same as Ctrl+Alt+F9 (see README and DEVELOPERS.md).
+ */
+export async function recalculateAll(): Promise<void> {
+  await Excel.run(async (context) => {
+    context.workbook.application.calculate(Excel.CalculationType.full);
+    await context.sync();
+  });
+}
