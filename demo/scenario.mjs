@@ -16,8 +16,9 @@ export const scenario = {
     'The last sheet is a what-if table: the copper half-cell potential over concentration and temperature, from one spilled formula.',
   ],
   howToUse: [
-    'Each sheet lists inputs (plain values) and results (live ECHEM formulas). The values shown were computed by the Cellwright functions when this file was written, so the file reads the same without the add-in.',
-    'With the Cellwright add-in loaded in Excel (npm start, then sideload manifest.xml), change any input and the results recalculate. To recalculate every formula through the add-in, press Ctrl+Alt+F9.',
+    'Each sheet lists inputs (plain values, yellow) and results (live ECHEM formulas, green). Every formula is stored with the value the Cellwright functions computed when this file was written.',
+    'With the Cellwright add-in loaded in Excel (npm start, then sideload manifest.xml), change any input and the results recalculate; Ctrl+Alt+F9 recalculates every formula through the add-in.',
+    'Without the add-in, a viewer that shows stored values shows the results as computed. Excel usually recalculates a file written by another program when it opens it, and LibreOffice recalculates array formulas on opening; an ECHEM cell recalculated without the add-in shows #NAME?. The terminal output of npm run demo lists every value.',
     'Spilled results (tables computed by one formula) are stored as array formulas over the range they fill; select the range to see the formula.',
     'The potentials come from the potential table in use: the built-in table unless the workbook holds its own (see the task pane). Every row of that table names its source; ECHEM.SOURCE shows it.',
     'Regenerate this file with: npm run demo',
@@ -272,7 +273,7 @@ export const scenario = {
     /* ------------------------------------------------------------------------------------ */
     {
       name: 'What-if',
-      title: 'What-if: the copper half-cell potential over concentration and temperature',
+      title: 'The copper half-cell potential over concentration and temperature',
       intro: [
         'One spilled formula fills the table: activity = molality × γ(Cu²⁺) from the Davies equation at each temperature (CuSO4 alone, so I = 4m), then the Cu²⁺/Cu potential at E°(T).',
         'Above I ≈ 0.5 mol/kg the Davies equation is an extrapolation; treat those rows as trends.',

@@ -85,6 +85,7 @@ function printSheet(laid, ev) {
       out();
       out(bold(`   ${b.section}`));
       if (b.text) out(`   ${b.text}`);
+      out(dim(`   ${pad('cell', 5)}${pad('quantity', LABEL)} ${padLeft('value', 12)}  ${pad('unit', 10)}formula, or input`));
     } else if (b.kind === 'text') {
       out(dim(`   ${b.text}`));
     } else if (b.kind === 'quantity') {
@@ -94,10 +95,10 @@ function printSheet(laid, ev) {
       const shown = padLeft(formatValue(v, cell.digits), 12);
       const unit = pad(b.unit ?? '', 10);
       const label = width(b.label) > LABEL ? `${b.label}\n${' '.repeat(LABEL + 9)}` : pad(b.label, LABEL);
-      const how = cell.formula ? `=${cell.formula}` : 'input';
+      const how = cell.formula ? `=${cell.formula}` : `input${b.note ? ` · ${b.note}` : ''}`;
       out(`   ${pad(a, 5)}${label} ${shown}  ${unit}${dim(how)}`);
       if (isErrorValue(v) && v.message) out(dim(`${' '.repeat(LABEL + 9)}${v.code}: ${v.message}${cell.expect ? ' (expected here)' : ''}`));
-      if (b.note) out(dim(`${' '.repeat(LABEL + 9)}${b.note}`));
+      if (b.note && cell.formula) out(dim(`${' '.repeat(LABEL + 9)}${b.note}`));
     } else if (b.kind === 'table' || b.kind === 'grid') {
       printGrid(laid, ev, b, value);
     }
@@ -248,9 +249,6 @@ function writeCover(wb, bundleInfo) {
   for (const s of scenario.sheets) line(`${s.name}: ${s.title}`);
   heading('How to use this workbook');
   for (const p of scenario.howToUse) line(p);
-  line('Yellow cells are inputs; green cells are results of ECHEM formulas.');
-  const key = ws.getCell(r - 1, 1);
-  key.fill = FILL.input;
   heading('Cautions');
   for (const p of scenario.cautions) line(p, { font: { color: { argb: 'FF8A1C1C' } } });
   heading('Provenance');
@@ -263,7 +261,9 @@ function writeCover(wb, bundleInfo) {
 /* ---------------------------------------------------------------------------------------- */
 
 async function main() {
-  const buildNote = argv.includes('--no-build') ? 'using dist/ as it is (--no-build)' : ensureBuilt({ quiet: QUIET });
+  const buildNote = argv.includes('--no-build') ? 'dist/ used as it is: --no-build' : ensureBuilt({ quiet: QUIET });
+  const afterBuild = process.hrtime.bigint();
+  const buildSeconds = Number(afterBuild - started) / 1e9;
   const bundle = loadBundle();
   const version = JSON.parse(readFileSync(resolve(ROOT, 'package.json'), 'utf8')).version;
   out(bold(scenario.title));
@@ -291,7 +291,7 @@ async function main() {
 
   mkdirSync(dirname(OUT), { recursive: true });
   await wb.xlsx.writeFile(OUT);
-  const ms = Number(process.hrtime.bigint() - started) / 1e6;
+  const seconds = Number(process.hrtime.bigint() - afterBuild) / 1e9;
   const ids = bundle.metadata.functions.map((f) => f.id);
   const unused = ids.filter((id) => !used.has(id));
   const absent = [...used].filter((id) => !bundle.byId.has(id));
@@ -300,7 +300,8 @@ async function main() {
   out(`   ${scenario.sheets.length} sheets, ${formulas} formulas (${spilled} spilled), using ${ids.length - unused.length} of the bundle's ${ids.length} ECHEM functions.`);
   if (unused.length) out(`   Not used by the scenario: ${unused.join(', ')}.`);
   if (absent.length) out(`   Used by the scenario but not in this bundle: ${absent.join(', ')}.`);
-  out(`   Wrote ${relative(process.cwd(), OUT) || OUT} (${Math.round(statSync(OUT).size / 1024)} kB) in ${(ms / 1000).toFixed(1)} s.`);
+  const build = buildSeconds >= 1 ? ` (plus ${buildSeconds.toFixed(0)} s to build the bundle)` : '';
+  out(`   Evaluated and wrote ${relative(process.cwd(), OUT) || OUT} (${Math.round(statSync(OUT).size / 1024)} kB) in ${seconds.toFixed(1)} s${build}.`);
   if (unexpected.length) {
     out(bold(`   ${unexpected.length} formula(s) gave an error the scenario does not expect:`));
     for (const e of unexpected) out(`     ${e.sheet}!${e.addr} ${e.code}${e.message ? ` (${e.message})` : ''}: =${e.formula}`);

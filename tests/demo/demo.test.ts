@@ -88,7 +88,7 @@ describe('npm run demo', () => {
     expect(run.ms).toBeLessThan(20000);
     for (const s of scenario.sheets) expect(run.stdout).toContain(`━━ ${s.name} ━━ ${s.title}`);
     expect(run.stdout).toContain('No formula gave an unexpected error.');
-    expect(run.stdout).toMatch(/Wrote demo\/cellwright-demo\.xlsx/);
+    expect(run.stdout).toMatch(/wrote demo\/cellwright-demo\.xlsx/);
   });
 
   it('prints inputs, formulas and results with units', () => {
