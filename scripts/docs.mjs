@@ -364,12 +364,12 @@ h1{font-size:1.6rem}h2{margin-top:2.2rem;border-bottom:1px solid #d0d7de;padding
 code{font-family:ui-monospace,Consolas,monospace;background:#f3f4f6;padding:0 .25rem;border-radius:3px}
 table{border-collapse:collapse;margin:.5rem 0 1rem;font-size:.92rem}th,td{border:1px solid #d0d7de;padding:.25rem .5rem;text-align:left;vertical-align:top}th{background:#f6f8fa}
 section.fn{border-top:1px solid #eaeef2}section.fn:target{background:#fffbe6}
-.note{color:#57606a;font-size:.85rem}nav ul{columns:2}
+.note{color:#57606a;font-size:.85rem}
 `;
 
 function htmlValue(v) {
   if (!Array.isArray(v)) return `<strong>${esc(formatValue(v))}</strong>`;
-  return `a ${v.length}×${v[0].length} spill: <table>${v.map((r) => `<tr>${r.map((x) => `<td>${esc(formatValue(x))}</td>`).join('')}</tr>`).join('')}</table>`;
+  return `a ${v.length}×${v[0].length} spill:</p>\n<table>${v.map((r) => `<tr>${r.map((x) => `<td>${esc(formatValue(x))}</td>`).join('')}</tr>`).join('')}</table>`;
 }
 
 export function renderHtml(model) {
@@ -399,7 +399,8 @@ export function renderHtml(model) {
       const spill = f.rowResult ? ` Each element gives a row of ${f.rowResult} values, so one call spills 1×${f.rowResult}.` : '';
       H.push(`<p><strong>Result</strong> ${esc(f.returns)}${spill}</p>`);
       const says = f.example.says ? ` — ${esc(f.example.says)}` : '';
-      if (Array.isArray(f.example.value)) H.push(`<p><strong>Example</strong> <code>${esc(f.example.formula)}</code>${says} It returns ${htmlValue(f.example.value)}</p>`);
+      // (a spilled value closes the paragraph itself: a table cannot sit inside a <p>)
+      if (Array.isArray(f.example.value)) H.push(`<p><strong>Example</strong> <code>${esc(f.example.formula)}</code>${says} It returns ${htmlValue(f.example.value)}`);
       else H.push(`<p><strong>Example</strong> <code>${esc(f.example.formula)}</code> returns ${htmlValue(f.example.value)}${says}</p>`);
       if (f.errors.length) {
         H.push('<p><strong>Errors</strong></p>', '<ul>');

@@ -77,6 +77,21 @@ describe('docs/functions.md and docs/functions.html', () => {
     for (const m of md.matchAll(/\]\(#([^)]+)\)/g)) expect(anchors.has(m[1]), m[1]).toBe(true);
   });
 
+  it('functions.html nests its tags properly (no table inside a paragraph)', () => {
+    const stack: string[] = [];
+    const problems: string[] = [];
+    for (const m of html.matchAll(/<(\/?)([a-z0-9]+)[^>]*>/g)) {
+      const [, close, tag] = m;
+      if (['meta', 'br', 'img', 'link', 'html', 'head', 'body'].includes(tag)) continue;
+      if (!close) {
+        if (tag === 'table' && stack.includes('p')) problems.push(`a table inside a paragraph at ${m.index}`);
+        stack.push(tag);
+      } else if (stack.pop() !== tag) problems.push(`</${tag}> does not close the open tag at ${m.index}`);
+    }
+    expect(problems.slice(0, 5)).toEqual([]);
+    expect(stack).toEqual([]);
+  });
+
   it('functions.html is a plain static page with no external resources', () => {
     expect(html).toMatch(/^<!doctype html>/);
     expect(html).not.toMatch(/<script|<link|<img|<iframe|@import|url\(/i);
