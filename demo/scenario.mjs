@@ -18,6 +18,7 @@ export const scenario = {
   howToUse: [
     'Each sheet lists inputs (plain values, yellow) and results (live ECHEM formulas, green). Every formula is stored with the value the Cellwright functions computed when this file was written.',
     'With the Cellwright add-in loaded in Excel (npm start, then sideload manifest.xml), change any input and the results recalculate; Ctrl+Alt+F9 recalculates every formula through the add-in.',
+    'This file was written by a script, not by Excel. If ECHEM cells still show #NAME? with the add-in loaded, have Excel re-read the formulas: Find & Replace "=" with "=" in formulas, or select a cell and press F2 then Enter.',
     'Without the add-in, a viewer that shows stored values shows the results as computed. Excel usually recalculates a file written by another program when it opens it, and LibreOffice recalculates array formulas on opening; an ECHEM cell recalculated without the add-in shows #NAME?. The terminal output of npm run demo lists every value.',
     'Spilled results (tables computed by one formula) are stored as array formulas over the range they fill; select the range to see the formula.',
     'The potentials come from the potential table in use: the built-in table unless the workbook holds its own (see the task pane). Every row of that table names its source; ECHEM.SOURCE shows it.',
