@@ -32,11 +32,6 @@ export const ErrorCode = {
   invalidReference: '#REF!',
 };
 
-/** True for an Excel error value (from the bundle or from the formula evaluator). */
-export function isError(v) {
-  return v instanceof FakeError;
-}
-
 /** Newest modification time (ms) of the files under the given directories of the project. */
 function newestSource(dirs) {
   let newest = 0;

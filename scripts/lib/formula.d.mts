@@ -23,6 +23,5 @@ export function address(r: number, c: number): string;
 export function parseAddress(a: string): { r: number; c: number };
 export function parseFormula(text: string): Tree;
 export function echemCalls(tree: Tree, out?: Set<string>): Set<string>;
-export function references(tree: Tree): Array<{ r1: number; c1: number; r2: number; c2: number }>;
 export function unwrap(v: unknown): unknown;
 export function evaluate(tree: Tree, ctx: EvalContext): Promise<Value>;

@@ -215,16 +215,6 @@ export function echemCalls(tree, out = new Set()) {
   return out;
 }
 
-/** Every cell a formula reads, as {r1,c1,r2,c2} boxes. */
-export function references(tree, out = []) {
-  if (tree === null || typeof tree !== 'object') return out;
-  if (tree.k === 'ref') out.push({ r1: tree.r, c1: tree.c, r2: tree.r, c2: tree.c });
-  if (tree.k === 'range') out.push({ r1: tree.r1, c1: tree.c1, r2: tree.r2, c2: tree.c2 });
-  for (const key of ['a', 'b']) if (tree[key]) references(tree[key], out);
-  if (tree.args) for (const a of tree.args) references(a, out);
-  return out;
-}
-
 /* ---------------------------------------------------------------------------------------- */
 /* Evaluation                                                                                */
 /* ---------------------------------------------------------------------------------------- */
