@@ -167,13 +167,17 @@ const MAX_QUOTED = 40;
 /** Excel's limit on the characters of a text in one cell. */
 const EXCEL_MAX_TEXT = 32767;
 
-/** One line of plain words, at most MAX_MESSAGE characters, long quoted text shortened. */
+/**
+ * One line of plain words, at most MAX_MESSAGE characters. A longer message keeps its beginning
+ * (what was wrong) and its end (what is accepted) and loses the middle, which is where long
+ * quoted input sits.
+ */
 function tidyMessage(message: string): string {
   let m = message.replace(/\s+/g, ' ').trim();
-  if (m.length > 2 * MAX_QUOTED) {
-    m = m.replace(/"([^"]*)"/g, (whole, inner: string) => (inner.length > MAX_QUOTED ? `"${inner.slice(0, MAX_QUOTED - 3)}…"` : whole));
+  if (m.length > MAX_MESSAGE) {
+    const tail = floor(MAX_MESSAGE / 3);
+    m = `${m.slice(0, MAX_MESSAGE - tail - 1)}…${m.slice(m.length - tail)}`;
   }
-  if (m.length > MAX_MESSAGE) m = `${m.slice(0, MAX_MESSAGE - 1)}…`;
   return m === '' ? 'the value cannot be used here' : m;
 }
 
@@ -262,7 +266,7 @@ const NUMERIC_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 export function show(v: unknown): string {
   if (typeof v === 'string') {
     const t = v.length > MAX_QUOTED ? `${v.slice(0, MAX_QUOTED - 3)}…` : v;
-    return `"${t.replace(/\s+/g, ' ')}"`;
+    return `"${t.replace(/\s+/g, ' ').replace(/"/g, '""')}"`;
   }
   if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   if (v === null || v === undefined) return 'an empty cell';
@@ -615,6 +619,7 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     // 1. single values (and 1×1 ranges): the common per-cell path, no shapes needed
     let ranges: Array<Range | null> | null = null;
     let scalarError: CustomFunctions.Error | null = null;
+    let scalarErrorAt = n;
     for (let i = 0; i < n; i++) {
       let raw = raws[i];
       if (isList[i]) {
@@ -638,7 +643,10 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
         }
       }
       const v = read(i, raw);
-      if (scalarError === null && isErrorValue(v)) scalarError = v;
+      if (scalarError === null && isErrorValue(v)) {
+        scalarError = v;
+        scalarErrorAt = i;
+      }
       vals[i] = v;
     }
     if (ranges === null) {
@@ -667,15 +675,18 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     if (rows * cols > MAX_CELLS) return [[invalidValue(`the result would have ${rows * cols} cells; at most ${MAX_CELLS}`)]];
 
     const out: Cell[][] = new Array(rows);
-    if (scalarError !== null) {
-      for (let r = 0; r < rows; r++) out[r] = fillRow(scalarError, width || cols);
-      return out;
-    }
-
-    // 3. broadcast: the arguments that vary, with their data and whether they vary by row / column
+    // 3. the arguments that vary, in argument order. A cell's error is the first error among its
+    //    arguments in argument order, exactly as if the function were called with that cell's values.
     const idx: number[] = [];
-    for (let i = 0; i < n; i++) if (ranges[i] !== null) idx.push(i);
+    for (let i = 0; i < scalarErrorAt; i++) if (ranges[i] !== null) idx.push(i);
     const m = idx.length;
+    if (scalarError !== null) {
+      if (m === 0) {
+        for (let r = 0; r < rows; r++) out[r] = fillRow(scalarError, width || cols);
+        return out;
+      }
+      return firstErrors(idx, ranges, scalarError, rows, cols, out);
+    }
     if (m === 1 && !width) return broadcastOne(idx[0], ranges[idx[0]]!, vals, rows, cols, out);
     const rData = idx.map((i) => ranges![i]!.data);
     const rByRow = idx.map((i) => ranges![i]!.rows !== 1);
@@ -699,6 +710,40 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
         }
       }
       if (!width) out[r] = line;
+    }
+    return out;
+  };
+
+  /**
+   * Some single value is an error: each cell shows the first error among its arguments, which is
+   * that value's error unless a range argument before it has an error in that cell.
+   */
+  const firstErrors = (
+    idx: readonly number[],
+    ranges: ReadonlyArray<Range | null>,
+    scalarError: CustomFunctions.Error,
+    rows: number,
+    cols: number,
+    out: Cell[][],
+  ): Cell[][] => {
+    const w = width || cols;
+    for (let r = 0; r < rows; r++) {
+      const line: Cell[] = new Array(w);
+      for (let c = 0; c < cols; c++) {
+        let bad: CustomFunctions.Error = scalarError;
+        for (const k of idx) {
+          const sh = ranges[k]!;
+          const v = read(k, sh.data[sh.rows !== 1 ? r : 0][sh.cols !== 1 ? c : 0]);
+          if (typeof v === 'object' && v !== null && isErrorValue(v)) {
+            bad = v;
+            break;
+          }
+        }
+        if (width) {
+          for (let j = 0; j < width; j++) line[j] = bad;
+        } else line[c] = bad;
+      }
+      out[r] = line;
     }
     return out;
   };
@@ -779,7 +824,7 @@ function dims(raw: unknown): string {
 
 function shapeMismatch(spec: FunctionSpec, raws: unknown[], isList: readonly boolean[]): CustomFunctions.Error {
   const parts = spec.args
-    .map((a, i) => (isArray(raws[i]) && !isList[i] ? `${a.name} is ${dims(raws[i])}` : null))
+    .map((a, i) => (isArray(raws[i]) && !isList[i] && dims(raws[i]) !== '1×1' ? `${a.name} is ${dims(raws[i])}` : null))
     .filter((s): s is string => s !== null);
   return invalidValue(
     `ranges of different shapes cannot be combined (${parts.join(', ')}); give ranges of the same size, or a single row with a single column`,
