@@ -253,9 +253,15 @@ export function importCsv(text: string): CsvImport {
   };
 }
 
+/** A text cell: formula-guarded, quoted when it holds a comma, quote, line break or edge blanks. */
 function cell(s: string): string {
   const g = guard(s);
   return /[",\r\n]/.test(g) || g !== g.trim() ? `"${g.replace(/"/g, '""')}"` : g;
+}
+
+/** A number cell, as JavaScript writes it (a leading minus is a number, not a formula). */
+function num(x: number | undefined): string {
+  return x === undefined ? '' : String(x);
 }
 
 /**
@@ -273,15 +279,13 @@ export function exportCsv(t: TableRecords, description: string): string {
     CSV_COLUMNS.join(','),
   ];
   for (const c of t.couples) {
-    lines.push(['couple', c.key, c.halfReaction, '', String(c.e0), c.dEdT_mV_K === undefined ? '' : String(c.dEdT_mV_K), c.source, c.note ?? ''].map(cell).join(','));
+    lines.push([cell('couple'), cell(c.key), cell(c.halfReaction), '', num(c.e0), num(c.dEdT_mV_K), cell(c.source), cell(c.note ?? '')].join(','));
   }
   for (const e of t.electrodes) {
     const bad = e.aliases.find((a) => a.includes(ALIAS_SEPARATOR));
     if (bad !== undefined) throw new Error(`the electrode "${e.key}" has the other name "${bad}", which holds "${ALIAS_SEPARATOR}", the separator of the other_names column`);
     lines.push(
-      ['electrode', e.key, '', e.aliases.join(ALIAS_SEPARATOR), String(e.potential), e.dEdT_mV_K === undefined ? '' : String(e.dEdT_mV_K), e.source, e.note ?? '']
-        .map(cell)
-        .join(','),
+      [cell('electrode'), cell(e.key), '', cell(e.aliases.join(ALIAS_SEPARATOR)), num(e.potential), num(e.dEdT_mV_K), cell(e.source), cell(e.note ?? '')].join(','),
     );
   }
   return `\uFEFF${lines.join('\r\n')}\r\n`;

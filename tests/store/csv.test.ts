@@ -16,6 +16,8 @@ describe('CSV layout 1', () => {
     expect(r.electrodes).toEqual(B.electrodes);
     expect(text.startsWith('\uFEFF# Cellwright potential table')).toBe(true);
     expect(text.includes('\r\n')).toBe(true);
+    // Numbers are written as numbers: a negative E° is not guarded like a formula.
+    expect(text).toContain('couple,Zn2+/Zn,Zn2+ + 2e- -> Zn,,-0.7618,');
   });
 
   it('round-trips hostile text: quotes, commas, line breaks, markup and formula starts', () => {
