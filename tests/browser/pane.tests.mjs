@@ -1,0 +1,650 @@
+// Browser tests of the task pane (run by scripts/test-browser.mjs in headless Chromium, 320 px wide).
+//
+// The page is the built dist/taskpane.html: it loads functions.js and taskpane.js like Excel's shared
+// runtime, with tests/browser/stub-office.js standing in for office.js. Each test gets a fresh browser
+// context (a new, empty workbook); reloading a page is closing and reopening the workbook.
+//
+// Every test checks results through what a user sees (text, focus, dialogs) and through the workbook:
+// the stored setting, the recalculations Excel was asked for, and what the worksheet functions
+// registered by functions.js now answer.
+import assert from 'node:assert/strict';
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
+const couplesFile = JSON.parse(readFileSync(resolve(root, 'data/couples.json'), 'utf8'));
+const BUILTIN_VERSION = couplesFile.version;
+const builtinE0 = (key) => couplesFile.couples.find((c) => c.key === key).e0;
+const KEY = 'cellwright.potentialTable';
+
+/* ------------------------------------------------------------------------------------------------ */
+/* Helpers                                                                                          */
+/* ------------------------------------------------------------------------------------------------ */
+
+async function ready(page) {
+  await page.waitForFunction(() => document.getElementById('app')?.getAttribute('aria-busy') === 'false');
+  await page.waitForFunction(() => !/Reading the workbook/.test(document.getElementById('in-use-body')?.textContent ?? ''));
+}
+
+async function openPane(open) {
+  const page = await open();
+  await ready(page);
+  return page;
+}
+
+async function reopen(page) {
+  await page.reload();
+  await ready(page);
+}
+
+const stored = (page) => page.evaluate((k) => window.__stubWorkbook.file().settings[k] ?? null, KEY);
+const calculations = (page) => page.evaluate(() => window.__stubWorkbook.file().calculations);
+/** What =ECHEM.E0(key) shows now, through the function functions.js registered. */
+const cellE0 = (page, key) => page.evaluate((k) => window.__stubWorkbook.call('E0', [[k]], null), key);
+
+async function text(page, selector) {
+  return (await page.locator(selector).innerText()).replace(/\s+/g, ' ').trim();
+}
+
+async function notice(page) {
+  await page.waitForFunction(() => (document.getElementById('notice')?.textContent ?? '').trim() !== '' || (document.getElementById('problem')?.textContent ?? '').trim() !== '');
+  return `${await page.locator('#notice').innerText()} ${await page.locator('#problem').innerText()}`.replace(/\s+/g, ' ').trim();
+}
+
+async function waitIdle(page) {
+  await page.waitForFunction(() => document.getElementById('app')?.getAttribute('aria-busy') === 'false');
+}
+
+/** Nothing is wider than the 320 px pane. */
+async function fitsWidth(page) {
+  const w = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, client: document.documentElement.clientWidth }));
+  assert.ok(w.scroll <= w.client, `the page is ${w.scroll} px wide in a ${w.client} px pane`);
+}
+
+/** Every form control has a label, every button an accessible name. */
+async function labelled(page) {
+  const missing = await page.evaluate(() => {
+    const out = [];
+    for (const el of document.querySelectorAll('input, textarea, select')) {
+      if (el.type === 'hidden' || el.closest('[hidden]')) continue;
+      const named = el.labels?.length > 0 || el.getAttribute('aria-label') || el.getAttribute('aria-labelledby');
+      if (!named) out.push(`${el.tagName.toLowerCase()}#${el.id}`);
+    }
+    for (const b of document.querySelectorAll('button')) {
+      if (b.closest('[hidden]') || b.closest('dialog:not([open])')) continue;
+      if (!(b.getAttribute('aria-label') || b.textContent.trim())) out.push(`button#${b.id}`);
+    }
+    return out;
+  });
+  assert.deepEqual(missing, [], `unlabelled controls: ${missing.join(', ')}`);
+}
+
+async function fill(page, kind, fields) {
+  for (const [name, value] of Object.entries(fields)) await page.fill(`#f-${kind}-${name}`, value);
+}
+
+async function addCouple(page, fields) {
+  await page.click('#add-couple');
+  await fill(page, 'couple', fields);
+  await page.click('#save-couple');
+  await waitIdle(page);
+  await page.waitForSelector('#editor-couple', { state: 'hidden' });
+}
+
+const row = (page, kind, key) => page.locator(`#list-${kind} > li`).filter({ has: page.locator('.row-key', { hasText: new RegExp(`^${key.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }) });
+
+async function confirmDialog(page, accept = true) {
+  await page.waitForSelector('dialog#confirm[open]');
+  await page.click(accept ? '#confirm-ok' : '#confirm-cancel');
+  await page.waitForSelector('dialog#confirm', { state: 'hidden' });
+}
+
+/** Canonical JSON and the checksum as DEVELOPERS.md documents them, written out independently here. */
+function canonical(v) {
+  if (v === null) return 'null';
+  if (Array.isArray(v)) return `[${v.map(canonical).join(',')}]`;
+  if (typeof v === 'object') {
+    return `{${Object.keys(v).filter((k) => v[k] !== undefined).sort().map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(',')}}`;
+  }
+  return JSON.stringify(v);
+}
+function reseal(doc) {
+  const sorted = (l) => [...l].sort();
+  const content = {
+    basedOn: doc.basedOn,
+    couples: doc.couples,
+    electrodes: doc.electrodes,
+    own: { couples: sorted(doc.own.couples), electrodes: sorted(doc.own.electrodes) },
+    removed: { couples: sorted(doc.removed.couples), electrodes: sorted(doc.removed.electrodes) },
+  };
+  return JSON.stringify({ ...doc, checksum: `sha256:${createHash('sha256').update(canonical(content), 'utf8').digest('hex')}` });
+}
+
+/* ------------------------------------------------------------------------------------------------ */
+/* Tests                                                                                            */
+/* ------------------------------------------------------------------------------------------------ */
+
+export const tests = [
+  {
+    name: 'start: the built-in table is in use, nothing is stored, cautions are shown, 320 px fits',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      const inUse = await text(page, '#in-use');
+      assert.match(inUse, new RegExp(`Built-in table ${BUILTIN_VERSION}`));
+      assert.match(inUse, new RegExp(`Couples ${couplesFile.couples.length}`));
+      assert.match(inUse, /Checksum sha256:[0-9a-f]{64}/);
+      assert.match(inUse, /no table of its own/);
+      assert.match(inUse, /Worksheet functions: use the built-in table/);
+      assert.equal(await stored(page), null);
+      assert.match(await text(page, '#count-couple'), new RegExp(`^${couplesFile.couples.length} couples`));
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), builtinE0('Cu2+/Cu'));
+      assert.match(await text(page, '.app-footer'), /H2.*Cl2.*HCN.*cyanide.*chromium\(VI\).*local codes/);
+      await fitsWidth(page);
+      await labelled(page);
+      await shot(page, '01-built-in-table-in-use');
+      await page.click('#tab-about');
+      const about = await text(page, '#panel-about');
+      for (const needle of [/hydrogen/, /chlorine/, /hydrogen cyanide/, /Cyanide baths/, /chromium\(VI\)/, /Cathodic protection/, /responsibility of the qualified engineer/, /Local codes, standards, regulations and licensed professional practice/, /CRC Handbook/]) {
+        assert.match(about, needle);
+      }
+      await fitsWidth(page);
+      await shot(page, '02-about-and-cautions');
+    },
+  },
+
+  {
+    name: 'add a couple: validation as you type, n derived, stored, functions answer it, recalculated',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#add-couple');
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'f-couple-halfReaction');
+      await page.fill('#f-couple-halfReaction', 'Tl+ + 2e- -> Tl');
+      assert.match(await text(page, '#f-couple-halfReaction-error'), /charge/i);
+      assert.equal(await page.getAttribute('#f-couple-halfReaction', 'aria-invalid'), 'true');
+      await page.fill('#f-couple-halfReaction', 'Tl+ + e- -> Tl');
+      assert.equal(await text(page, '#f-couple-halfReaction-info'), 'Balanced · n = 1 electron');
+      assert.equal(await page.getAttribute('#f-couple-halfReaction', 'aria-invalid'), null);
+      assert.match(await text(page, '#f-couple-key-info'), /Suggested from the half-reaction: Tl\+\/Tl/);
+      await page.fill('#f-couple-key', 'Tl+/Tl');
+      await page.fill('#f-couple-e0', 'abc');
+      assert.match(await text(page, '#f-couple-e0-error'), /must be a number/);
+      await shot(page, '03-add-couple-validation-error');
+      // Saving with errors saves nothing and says why.
+      await page.click('#save-couple');
+      assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
+      assert.match(await text(page, '#f-couple-source-error'), /source is required/);
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'f-couple-e0');
+      assert.equal(await stored(page), null);
+      await page.fill('#f-couple-e0', '−0.336');
+      await page.fill('#f-couple-source', 'Our lab, thallium study 2026');
+      await page.click('#save-couple');
+      await waitIdle(page);
+      await page.waitForSelector('#editor-couple', { state: 'hidden' });
+      assert.match(await notice(page), /Added couple Tl\+\/Tl/);
+      const doc = JSON.parse(await stored(page));
+      assert.equal(doc.revision, 1);
+      assert.deepEqual(doc.own.couples, ['Tl+/Tl']);
+      assert.equal(await cellE0(page, 'Tl+/Tl'), -0.336);
+      assert.deepEqual(await calculations(page), ['Full']);
+      const r = row(page, 'couple', 'Tl+/Tl');
+      assert.match(await r.innerText(), /−0\.336 V[\s\S]*n = 1[\s\S]*Added in this workbook/);
+      // Focus is on the new row's Edit button.
+      assert.equal(await page.evaluate(() => document.activeElement?.getAttribute('aria-label')), 'Edit Tl+/Tl');
+      assert.match(await text(page, '#in-use'), /This workbook’s own table.*Revision 1.*Differ from built-in 1 row/);
+      await fitsWidth(page);
+      await shot(page, '04-couple-added');
+    },
+  },
+
+  {
+    name: 'edit a row with a validation error, then save: the functions use the new value',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.fill('#filter-couple', 'Cu2+/Cu');
+      await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
+      assert.match(await text(page, '#editor-couple-title'), /Edit couple Cu2\+\/Cu/);
+      assert.equal(await page.inputValue('#f-couple-e0'), String(builtinE0('Cu2+/Cu')));
+      await page.fill('#f-couple-e0', '9');
+      await page.fill('#f-couple-source', '');
+      assert.match(await text(page, '#f-couple-e0-error'), /between -4 and 4 V/);
+      assert.match(await text(page, '#f-couple-source-error'), /source is required/);
+      await page.click('#save-couple');
+      assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
+      await shot(page, '05-edit-validation-errors');
+      assert.equal(await stored(page), null);
+      await page.fill('#f-couple-e0', '0.340');
+      await page.fill('#f-couple-source', 'Plant QA measurement, 2026-02');
+      await page.click('#save-couple');
+      await waitIdle(page);
+      await page.waitForSelector('#editor-couple', { state: 'hidden' });
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
+      assert.match(await row(page, 'couple', 'Cu2+/Cu').innerText(), /Edited here: E°, source/);
+      // Escape closes the editor without saving.
+      await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
+      await page.fill('#f-couple-e0', '0.5');
+      await page.keyboard.press('Escape');
+      await page.waitForSelector('#editor-couple', { state: 'hidden' });
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
+      assert.equal(JSON.parse(await stored(page)).revision, 1);
+    },
+  },
+
+  {
+    name: 'delete and revert: #N/A after delete, restored from the built-in table, edited row reverted',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.fill('#filter-couple', 'Zn');
+      await row(page, 'couple', 'Zn2+/Zn').getByRole('button', { name: 'Delete Zn2+/Zn' }).click();
+      await page.waitForSelector('dialog#confirm[open]');
+      assert.match(await text(page, '#confirm'), /Delete Zn2\+\/Zn\?.*#N\/A.*restored/);
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'confirm-cancel'); // destructive: Cancel has focus
+      await shot(page, '06-confirm-delete');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      const na = await cellE0(page, 'Zn2+/Zn');
+      assert.equal(na.error, '#N/A');
+      assert.deepEqual(JSON.parse(await stored(page)).removed.couples, ['Zn2+/Zn']);
+      assert.match(await text(page, '#removed-couple'), /Built-in rows deleted in this workbook \(1\) Zn2\+\/Zn/);
+      await page.getByRole('button', { name: 'Restore Zn2+/Zn from the built-in table' }).click();
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.equal(await cellE0(page, 'Zn2+/Zn'), builtinE0('Zn2+/Zn'));
+      assert.equal(await text(page, '#removed-couple'), '');
+      // Revert an edited row.
+      await page.fill('#filter-couple', 'Ag+/Ag');
+      await row(page, 'couple', 'Ag+/Ag').getByRole('button', { name: 'Edit Ag+/Ag' }).click();
+      await fill(page, 'couple', { e0: '0.80', source: 'lab' });
+      await page.click('#save-couple');
+      await waitIdle(page);
+      await page.waitForSelector('#editor-couple', { state: 'hidden' });
+      assert.equal(await cellE0(page, 'Ag+/Ag'), 0.8);
+      await row(page, 'couple', 'Ag+/Ag').getByRole('button', { name: 'Revert Ag+/Ag to the built-in value' }).click();
+      assert.match(await text(page, '#confirm'), /E° 0\.8 → 0\.7996 V/);
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.equal(await cellE0(page, 'Ag+/Ag'), builtinE0('Ag+/Ag'));
+      assert.match(await text(page, '#in-use'), /Differ from built-in none/);
+      assert.equal((await calculations(page)).length, 4);
+    },
+  },
+
+  {
+    name: 'reset: asks first (cancel changes nothing), then removes the workbook table',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source: 'lab' });
+      const before = await stored(page);
+      await page.click('#reset');
+      assert.match(await text(page, '#confirm'), /Reset to the built-in table\?.*1 row that differ.*couple Tl\+\/Tl: added/);
+      await shot(page, '07-confirm-reset');
+      await confirmDialog(page, false);
+      assert.equal(await stored(page), before);
+      await page.click('#reset');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.equal(await stored(page), null);
+      assert.match(await text(page, '#in-use'), /Built-in table/);
+      assert.equal((await cellE0(page, 'Tl+/Tl')).error, '#N/A');
+      assert.deepEqual(await calculations(page), ['Full', 'Full']);
+    },
+  },
+
+  {
+    name: 'pin, reopen, and a newer built-in table: what would change is shown, update keeps own rows',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#pin');
+      await waitIdle(page);
+      assert.match(await notice(page), new RegExp(`Pinned: the built-in table ${BUILTIN_VERSION}`));
+      const pinned = JSON.parse(await stored(page));
+      assert.equal(pinned.basedOn, BUILTIN_VERSION);
+      const builtinChecksum = await page.evaluate(() => globalThis.cellwrightFunctionsHost.status().checksum);
+      assert.equal(pinned.checksum, builtinChecksum); // a pinned copy carries the built-in table's checksum
+      await reopen(page);
+      assert.match(await text(page, '#in-use'), /This workbook’s own table.*Revision 1.*Differ from built-in none/);
+      // The workbook was pinned to an older built-in table in which Cu2+/Cu was 0.337 V and Ag+/Ag was set here.
+      const doc = JSON.parse(await stored(page));
+      doc.basedOn = '2025.1';
+      doc.couples = doc.couples.map((c) => (c.key === 'Cu2+/Cu' ? { ...c, e0: 0.337 } : c.key === 'Ag+/Ag' ? { ...c, e0: 0.8, source: 'lab' } : c));
+      doc.own.couples = ['Ag+/Ag'];
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, reseal(doc)]);
+      await reopen(page);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.337); // pinned values, not the add-in's
+      const newer = await text(page, '#newer-builtin');
+      assert.match(newer, new RegExp(`built-in table ${BUILTIN_VERSION} is newer than 2025\\.1`));
+      assert.match(newer, /Updating would change 1 row: couple Cu2\+\/Cu: E° 0\.337 → 0\.3419 V/);
+      await fitsWidth(page);
+      await shot(page, '08-newer-built-in-table');
+      await page.click('#update-builtin');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), builtinE0('Cu2+/Cu'));
+      assert.equal(await cellE0(page, 'Ag+/Ag'), 0.8);
+      assert.equal(JSON.parse(await stored(page)).basedOn, BUILTIN_VERSION);
+      assert.equal(await page.locator('#newer-builtin').count(), 0);
+    },
+  },
+
+  {
+    name: 'import with a bad line: each rejected line with its reason, nothing changes, then the valid lines on request',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#tab-files');
+      const csv = [
+        'row_type,key,half_reaction,other_names,potential_V,dEdT_mV_per_K,source,note',
+        'couple,Tl+/Tl,Tl+ + e- -> Tl,,-0.336,,Lab 2026,',
+        'couple,In3+/In,In3+ + 3e- -> In,,abc,,Lab 2026,',
+        'couple,Cu2+/Cu,Cu2+ + 2e- -> Cu,,0.340,0.011,Plant QA,"re-measured, see ""log"""',
+        'electrode,Plant SCE,,plant calomel|bench SCE,0.244,-0.67,Lab 2026,',
+        'couple,Ga3+/Ga,Ga3+ + 2e- -> Ga,,-0.549,,Lab 2026,',
+      ].join('\n');
+      await page.fill('#import-text', csv);
+      await page.click('#import-check');
+      const report = await text(page, '#import-report');
+      assert.match(report, /3 lines accepted, 2 lines rejected/);
+      assert.match(report, /Line 3: potential_V "abc" is not a number/);
+      assert.match(report, /Line 6: .*charge/i);
+      assert.equal(await page.locator('#import-all').count(), 0);
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'import-summary');
+      await fitsWidth(page);
+      await shot(page, '09-import-report-with-rejected-lines');
+      assert.equal(await stored(page), null); // checking changed nothing
+      await page.click('#import-valid');
+      await waitIdle(page);
+      assert.match(await notice(page), /Imported 2 couples and 1 electrode/);
+      assert.equal(await cellE0(page, 'Tl+/Tl'), -0.336);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
+      assert.equal((await cellE0(page, 'In3+/In')), builtinE0('In3+/In'));
+      const doc = JSON.parse(await stored(page));
+      assert.equal(doc.couples.find((c) => c.key === 'Cu2+/Cu').note, 're-measured, see "log"');
+      assert.deepEqual(doc.electrodes.find((e) => e.key === 'Plant SCE').aliases, ['plant calomel', 'bench SCE']);
+      // A file of good lines only imports with one button; replace mode asks first.
+      await page.setInputFiles('#import-file', { name: 'two.csv', mimeType: 'text/csv', buffer: Buffer.from('\uFEFFkey,row_type,potential_V,source,half_reaction\r\nAg+/Ag,couple,0.7996,CRC,Ag+ + e- -> Ag\r\n') });
+      await page.waitForSelector('#import-all');
+      assert.match(await text(page, '#import-report'), /1 line accepted, 0 lines rejected/);
+      await page.check('input[name="import-mode"][value="replace"]');
+      await page.click('#import-check');
+      await page.click('#import-all');
+      assert.match(await text(page, '#confirm'), /Replace the whole table\?/);
+      await confirmDialog(page, false);
+      assert.equal(JSON.parse(await stored(page)).couples.length, doc.couples.length);
+      // A file that is not in the layout is refused whole.
+      await page.fill('#import-text', 'name,value\nCu,0.34\n');
+      await page.click('#import-check');
+      assert.match(await text(page, '#import-report'), /cannot be imported: .*"name", "value" are not columns/);
+    },
+  },
+
+  {
+    name: 'export: the CSV download and the CSV text hold the table in use',
+    async run({ open }) {
+      const page = await openPane(open);
+      await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source: 'Lab, "2026"' });
+      await page.click('#tab-files');
+      const [download] = await Promise.all([page.waitForEvent('download'), page.click('#export-download')]);
+      assert.equal(download.suggestedFilename(), 'cellwright-potential-table.csv');
+      const csv = readFileSync(await download.path(), 'utf8');
+      assert.ok(csv.startsWith('\uFEFF# Cellwright potential table, CSV layout 1.'));
+      assert.match(csv, /revision 1; checksum sha256:[0-9a-f]{64}/);
+      const lines = csv.trim().split('\r\n');
+      assert.equal(lines[2], 'row_type,key,half_reaction,other_names,potential_V,dEdT_mV_per_K,source,note');
+      assert.ok(lines.includes('couple,Tl+/Tl,Tl+ + e- -> Tl,,-0.336,,"Lab, ""2026""",'), lines.filter((l) => l.includes('Tl+')).join('\n'));
+      assert.equal(lines.filter((l) => l.startsWith('couple,')).length, couplesFile.couples.length + 1);
+      await page.click('#export-show');
+      assert.equal(await page.getAttribute('#export-show', 'aria-expanded'), 'true');
+      const shown = await page.inputValue('#export-text');
+      // A textarea gives its text with LF line ends; the rows must be the same apart from the export time.
+      assert.equal(shown.split('\n').slice(2).join('\n'), csv.replace(/\r\n/g, '\n').split('\n').slice(2).join('\n'));
+    },
+  },
+
+  {
+    name: 'filter: by text and by "differs from built-in"',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source: 'lab' });
+      await page.fill('#filter-couple', 'fe');
+      const keys = await page.locator('#list-couple .row-key').allInnerTexts();
+      assert.ok(keys.length >= 3 && keys.length < couplesFile.couples.length, `${keys.length} rows for "fe"`);
+      for (const li of await page.locator('#list-couple > li').allInnerTexts()) assert.match(li.toLowerCase(), /fe/);
+      assert.match(await text(page, '#count-couple'), new RegExp(`^${keys.length} couples? match of ${couplesFile.couples.length + 1}\\.`));
+      await page.fill('#filter-couple', 'CRC');
+      assert.ok((await page.locator('#list-couple > li').count()) > 10); // matches sources too
+      await page.fill('#filter-couple', '');
+      await page.check('#only-diff-couple');
+      assert.deepEqual(await page.locator('#list-couple .row-key').allInnerTexts(), ['Tl+/Tl']);
+      await shot(page, '10-filter-differing-rows');
+      await page.uncheck('#only-diff-couple');
+      await page.click('#tab-electrodes');
+      await page.fill('#filter-electrode', 'calomel');
+      const el = await page.locator('#list-electrode .row-key').allInnerTexts();
+      assert.ok(el.length >= 1 && el.includes('SCE'), el.join(', '));
+    },
+  },
+
+  {
+    name: 'keyboard only: tabs with arrow keys, add a couple, confirm with the keyboard, Escape cancels',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      // From the top of the page, Tab until the "Add couple" button has focus.
+      await page.evaluate(() => document.activeElement?.blur());
+      let found = false;
+      for (let i = 0; i < 30 && !found; i++) {
+        await page.keyboard.press('Tab');
+        found = await page.evaluate(() => document.activeElement?.id === 'add-couple');
+      }
+      assert.ok(found, 'Tab reaches Add couple');
+      await page.keyboard.press('Enter');
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'f-couple-halfReaction');
+      await page.keyboard.type('Ga3+ + 3e- -> Ga');
+      await page.keyboard.press('Tab');
+      await page.keyboard.type('Ga3+/Ga');
+      await page.keyboard.press('Tab');
+      await page.keyboard.type('-0.549');
+      await page.keyboard.press('Tab');
+      await page.keyboard.press('Tab');
+      await page.keyboard.type('CRC Handbook, 92nd ed.');
+      await shot(page, '11-keyboard-entry');
+      await page.keyboard.press('Enter'); // submits the form
+      await waitIdle(page);
+      await page.waitForSelector('#editor-couple', { state: 'hidden' });
+      assert.equal(await cellE0(page, 'Ga3+/Ga'), -0.549);
+      assert.equal(await page.evaluate(() => document.activeElement?.getAttribute('aria-label')), 'Edit Ga3+/Ga');
+      // Tab to the row's Delete button and confirm with the keyboard; Escape first cancels.
+      await page.keyboard.press('Tab');
+      assert.equal(await page.evaluate(() => document.activeElement?.getAttribute('aria-label')), 'Delete Ga3+/Ga');
+      await page.keyboard.press('Enter');
+      await page.waitForSelector('dialog#confirm[open]');
+      await page.keyboard.press('Escape');
+      await page.waitForSelector('dialog#confirm', { state: 'hidden' });
+      assert.equal(await page.evaluate(() => document.activeElement?.getAttribute('aria-label')), 'Delete Ga3+/Ga'); // focus returns
+      await page.keyboard.press('Enter');
+      await page.waitForSelector('dialog#confirm[open]');
+      await page.keyboard.press('Shift+Tab'); // from Cancel to Delete
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'confirm-ok');
+      await page.keyboard.press('Enter');
+      await waitIdle(page);
+      assert.equal((await cellE0(page, 'Ga3+/Ga')).error, '#N/A');
+      // Tabs: focus the selected tab, arrows move between sections.
+      await page.focus('#tab-couples');
+      await page.keyboard.press('ArrowRight');
+      assert.equal(await page.getAttribute('#tab-electrodes', 'aria-selected'), 'true');
+      assert.equal(await page.isVisible('#panel-electrodes'), true);
+      await page.keyboard.press('End');
+      assert.equal(await page.getAttribute('#tab-about', 'aria-selected'), 'true');
+      await page.keyboard.press('ArrowRight');
+      assert.equal(await page.getAttribute('#tab-couples', 'aria-selected'), 'true');
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'tab-couples');
+    },
+  },
+
+  {
+    name: 'hostile text is shown as text, never run: in rows, in the import report, in the sheet copy',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      const source = '<img src=x onerror="window.__pwned=1">';
+      const note = '<script>window.__pwned=2</script><b>bold?</b>';
+      await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source, note });
+      await page.click('#tab-electrodes');
+      await page.click('#add-electrode');
+      await fill(page, 'electrode', { key: '<img src=y onerror=window.__pwned=3>', aliases: '=HYPERLINK("http://example.invalid","x")', potential: '0.2', source: '"><svg onload=window.__pwned=4>' });
+      await page.click('#save-electrode');
+      await waitIdle(page);
+      await page.waitForSelector('#editor-electrode', { state: 'hidden' });
+      await page.click('#tab-couples');
+      await page.fill('#filter-couple', 'Tl+');
+      const li = await row(page, 'couple', 'Tl+/Tl').innerText();
+      assert.ok(li.includes(`Source: ${source}`) && li.includes(`Note: ${note}`), li);
+      const injected = await page.evaluate(() => ({
+        pwned: window.__pwned ?? null,
+        elements: document.querySelectorAll('main img, main script, main svg, main b').length,
+      }));
+      assert.deepEqual(injected, { pwned: null, elements: 0 });
+      await shot(page, '12-hostile-text-shown-as-text');
+      await page.click('#tab-electrodes');
+      assert.ok((await page.locator('#list-electrode').innerText()).includes('<img src=y onerror=window.__pwned=3>'));
+      // In the import report.
+      await page.click('#tab-files');
+      await page.fill('#import-text', 'row_type,key,potential_V,source\ncouple,<iframe src=javascript:window.__pwned=5>,1,x\n');
+      await page.click('#import-check');
+      assert.ok((await text(page, '#import-rejected')).includes('<iframe src=javascript:window.__pwned=5>'));
+      // In the sheet copy: text cells are text, none becomes a formula.
+      await page.click('#copy-sheet');
+      assert.match(await notice(page), /Copied the table to the new sheet “Potential table”/);
+      const sheet = (await page.evaluate(() => window.__stubWorkbook.file().sheets))['Potential table'];
+      const main = sheet.writes.find((w) => w.values);
+      assert.equal(main.formulas, 0);
+      assert.ok(main.values.some((r) => r[1] === '=HYPERLINK("http://example.invalid","x")'));
+      assert.deepEqual(await page.evaluate(() => ({ pwned: window.__pwned ?? null, frames: document.querySelectorAll('iframe').length })), { pwned: null, frames: 0 });
+    },
+  },
+
+  {
+    name: 'an unreadable stored table: the problem is shown, functions answer #N/A, raw text exported, reset only on request',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      const raw = '{"format":"cellwright.potential-table","schema":2,"basedOn":"2026.1","couples":[{"key":"Cu2+/Cu"';
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, raw]);
+      await reopen(page);
+      const card = await text(page, '#in-use');
+      assert.match(card, /This workbook’s table cannot be read/);
+      assert.match(card, /not valid JSON/);
+      assert.match(card, /Nothing has been changed or replaced/);
+      assert.match(card, /Worksheet functions: answer #N\/A/);
+      const cell = await cellE0(page, 'Cu2+/Cu');
+      assert.equal(cell.error, '#N/A');
+      assert.match(cell.message, /^the workbook's potential table could not be read: the stored table is not valid JSON/);
+      assert.equal(await page.isDisabled('#add-couple'), true);
+      await fitsWidth(page);
+      await shot(page, '13-unreadable-table');
+      const [download] = await Promise.all([page.waitForEvent('download'), page.click('#raw-download')]);
+      assert.equal(readFileSync(await download.path(), 'utf8'), raw);
+      await page.click('#raw-show');
+      assert.equal(await page.inputValue('#raw-text'), raw);
+      assert.equal(await stored(page), raw); // still there, untouched
+      await page.click('#reset');
+      assert.match(await text(page, '#confirm'), /cannot be read.*removes it for good/);
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.equal(await stored(page), null);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), builtinE0('Cu2+/Cu'));
+      assert.match(await text(page, '#in-use'), /Built-in table/);
+    },
+  },
+
+  {
+    name: 'copy to sheet: the table with version, checksum and sources on a new sheet',
+    async run({ open }) {
+      const page = await openPane(open);
+      await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source: 'lab' });
+      await page.click('#tab-files');
+      await page.click('#copy-sheet');
+      assert.match(await notice(page), /Potential table/);
+      await page.click('#copy-sheet');
+      await page.waitForFunction(() => /Potential table \(2\)/.test(document.getElementById('notice')?.textContent ?? ''));
+      const sheets = await page.evaluate(() => window.__stubWorkbook.file().sheets);
+      assert.deepEqual(Object.keys(sheets), ['Potential table', 'Potential table (2)']);
+      assert.equal(sheets['Potential table (2)'].active, true);
+      const v = sheets['Potential table'].writes.find((w) => w.values).values;
+      const checksum = JSON.parse(await stored(page)).checksum;
+      assert.deepEqual(v[3].slice(0, 2), ['Checksum', checksum]);
+      assert.match(v[1][1], /own table, based on built-in .*revision 1/);
+      const tl = v.find((r) => r[0] === 'Tl+/Tl');
+      assert.deepEqual(tl.slice(0, 6), ['Tl+/Tl', 'Tl+ + e- -> Tl', 1, -0.336, '', 'lab']);
+      assert.equal(v.filter((r) => typeof r[3] === 'number').length >= couplesFile.couples.length + 1, true);
+    },
+  },
+
+  {
+    name: 'changes made elsewhere: the functions follow, the pane says so, and a stale save is stopped and can be re-applied',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source: 'pane A' });
+      // A co-author changes Ag+/Ag (revision 2): the settings event reaches the functions.
+      const doc = JSON.parse(await stored(page));
+      doc.revision = 2;
+      doc.couples = doc.couples.map((c) => (c.key === 'Ag+/Ag' ? { ...c, e0: 0.81, source: 'co-author' } : c));
+      doc.own.couples = [...doc.own.couples, 'Ag+/Ag'];
+      await page.evaluate(([k, v]) => window.__stubWorkbook.writeElsewhere(k, v), [KEY, reseal(doc)]);
+      await page.waitForFunction(async () => (await window.__stubWorkbook.call('E0', [['Ag+/Ag']], null)) === 0.81);
+      // This pane has not noticed yet; saving now must not overwrite the co-author's row.
+      await page.fill('#filter-couple', 'Cu2+/Cu');
+      await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
+      await fill(page, 'couple', { e0: '0.35', source: 'pane A' });
+      await page.click('#save-couple');
+      await waitIdle(page);
+      const msg = await notice(page);
+      assert.match(msg, /Not saved: this workbook’s table was changed elsewhere/);
+      assert.match(msg, /couple Ag\+\/Ag: E° 0\.7996 → 0\.81 V, source/);
+      assert.match(await text(page, '#f-couple-form-error'), /Save again/);
+      assert.equal(JSON.parse(await stored(page)).revision, 2);
+      await fitsWidth(page);
+      await shot(page, '14-conflict-changed-elsewhere');
+      await page.getByRole('button', { name: 'Apply my change to the latest table' }).click();
+      await waitIdle(page);
+      await page.waitForFunction(() => /Saved couple Cu2\+\/Cu/.test(document.getElementById('notice')?.textContent ?? ''));
+      const now = JSON.parse(await stored(page));
+      assert.equal(now.revision, 3);
+      assert.equal(await cellE0(page, 'Ag+/Ag'), 0.81);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.35);
+      assert.equal(await cellE0(page, 'Tl+/Tl'), -0.336);
+      // Another change elsewhere is noticed when the pane gets focus again.
+      now.revision = 4;
+      now.couples = now.couples.filter((c) => c.key !== 'Tl+/Tl');
+      now.own.couples = now.own.couples.filter((k) => k !== 'Tl+/Tl');
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, reseal(now)]);
+      await page.evaluate(() => window.dispatchEvent(new Event('focus')));
+      await page.waitForFunction(() => /changed elsewhere/.test(document.getElementById('notice')?.textContent ?? '') && /Tl\+\/Tl: removed/.test(document.getElementById('notice')?.textContent ?? ''));
+      assert.match(await text(page, '#in-use'), /Revision 4/);
+      assert.equal((await cellE0(page, 'Tl+/Tl')).error, '#N/A');
+    },
+  },
+
+  {
+    name: '2,000 rows: imported, listed with a cap, filtered, and read back after reopening',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      const lines = ['row_type,key,half_reaction,potential_V,source'];
+      for (let k = 1; k <= 2000; k++) lines.push(`couple,C${k}H${2 * k}O/C${k}H${2 * k + 2}O,C${k}H${2 * k}O + 2H+ + 2e- -> C${k}H${2 * k + 2}O,${((k % 300) / 100 - 1.5).toFixed(2)},Synthetic row for the size test`);
+      await page.click('#tab-files');
+      await page.setInputFiles('#import-file', { name: 'big.csv', mimeType: 'text/csv', buffer: Buffer.from(lines.join('\n')) });
+      await page.waitForSelector('#import-all');
+      assert.match(await text(page, '#import-report'), /2,000 lines accepted, 0 lines rejected/);
+      await page.click('#import-all');
+      await waitIdle(page);
+      assert.match(await notice(page), /Imported 2000 couples/);
+      const size = (await stored(page)).length;
+      assert.ok(size > 200_000 && size < 2_000_000, `${size} characters`);
+      await reopen(page);
+      await page.click('#tab-couples');
+      assert.match(await text(page, '#count-couple'), new RegExp(`^${(couplesFile.couples.length + 2000).toLocaleString('en-US')} couples\\. Showing the first 200`));
+      assert.equal(await page.locator('#list-couple > li').count(), 200);
+      await page.fill('#filter-couple', 'C1999H');
+      assert.deepEqual(await page.locator('#list-couple .row-key').allInnerTexts(), ['C1999H3998O/C1999H4000O']);
+      assert.equal(await cellE0(page, 'C2000H4000O/C2000H4002O'), Number(((2000 % 300) / 100 - 1.5).toFixed(2)));
+      await shot(page, '15-two-thousand-rows-filtered');
+    },
+  },
+];
