@@ -171,7 +171,7 @@ function checkRows(name: string, x: unknown, allowed: Set<string>, problems: str
     if (!isPlainObject(r)) problems.push(`${name} row ${i + 1} is not a record`);
     else {
       const extra = Object.keys(r).filter((k) => !allowed.has(k));
-      if (extra.length > 0) problems.push(`${name} row ${i + 1} has fields Cellwright does not write: ${extra.join(', ')}`);
+      if (extra.length > 0) problems.push(`${name} row ${i + 1} has fields Cellwright does not write: ${extra.map((k) => JSON.stringify(k)).join(', ')}`);
     }
   });
   return x.filter(isPlainObject);
@@ -201,9 +201,12 @@ export function readStoredText(text: unknown, builtin: VersionedRecords): Stored
 }
 
 function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
-  if (typeof text !== 'string') return fail('not-ours', `the stored value is a ${text === null ? 'null' : typeof text}, not the text Cellwright writes`);
-  if (text.trim() === '') return fail('empty', 'the stored table is empty');
+  if (typeof text !== 'string') {
+    const what = text === null ? 'null' : text === undefined ? 'missing' : `a ${typeof text}`;
+    return fail('not-ours', `the stored value is ${what}, not the text Cellwright writes`);
+  }
   if (text.length > MAX_READ_CHARS) return fail('too-large', `the stored table is ${text.length.toLocaleString('en-US')} characters long, more than Cellwright reads`);
+  if (text.trim() === '') return fail('empty', 'the stored table is empty');
   let doc: unknown;
   try {
     doc = JSON.parse(text);
@@ -225,7 +228,7 @@ function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
     ? ['format', 'schema', 'basedOn', 'changedAt', 'checksum', 'couples', 'electrodes']
     : ['format', 'schema', 'basedOn', 'revision', 'changedAt', 'checksum', 'own', 'removed', 'couples', 'electrodes'];
   const extra = Object.keys(doc).filter((k) => !allowedTop.includes(k));
-  if (extra.length > 0) problems.push(`fields Cellwright does not write: ${extra.join(', ')}`);
+  if (extra.length > 0) problems.push(`fields Cellwright does not write: ${extra.map((k) => JSON.stringify(k)).join(', ')}`);
   const missing = allowedTop.filter((k) => !(k in doc));
   if (missing.length > 0) problems.push(`missing fields: ${missing.join(', ')}`);
   if (typeof doc.basedOn !== 'string' || doc.basedOn.trim() === '') problems.push('"basedOn" is not a version text');
