@@ -133,9 +133,16 @@ async function main() {
       pages.push(page);
       return page;
     };
-    const shot = async (page, name) => {
+    // A screenshot of what the pane shows (320 × 900, a usual task pane), scrolled to `selector` when given.
+    const shot = async (page, name, selector) => {
       const file = resolve(shotDir, `${name}.png`);
-      await page.screenshot({ path: file, fullPage: true });
+      if (selector) {
+        await page.locator(selector).first().evaluate((el) => {
+          el.scrollIntoView({ block: 'start' });
+          window.scrollBy(0, -8);
+        });
+      } else await page.evaluate(() => window.scrollTo(0, 0));
+      await page.screenshot({ path: file });
       screenshots.push(`test-output/screenshots/${name}.png`);
     };
     const t0 = Date.now();

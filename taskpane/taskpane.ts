@@ -580,7 +580,7 @@ function showChecks(kind: RowKind): ReturnType<typeof check> {
     const err = (c.errors as Record<string, string | undefined>)[f];
     const shown = err !== undefined && (ed.showAll || ed.touched.has(f)) ? err : '';
     const errEl = document.getElementById(`f-${kind}-${f}-error`);
-    if (errEl) replace(errEl, shown === '' ? '' : `${shown[0].toUpperCase()}${shown.slice(1)}.`);
+    if (errEl) replace(errEl, shown === '' ? '' : `${shown[0].toUpperCase()}${shown.slice(1)}${/[.?!]$/.test(shown) ? '' : '.'}`);
     if (shown === '') el.removeAttribute('aria-invalid');
     else el.setAttribute('aria-invalid', 'true');
     const infoEl = document.getElementById(`f-${kind}-${f}-info`);

@@ -170,7 +170,7 @@ export const tests = [
       await page.fill('#f-couple-key', 'Tl+/Tl');
       await page.fill('#f-couple-e0', 'abc');
       assert.match(await text(page, '#f-couple-e0-error'), /must be a number/);
-      await shot(page, '03-add-couple-validation-error');
+      await shot(page, '03-add-couple-validation-error', '#editor-couple');
       // Saving with errors saves nothing and says why.
       await page.click('#save-couple');
       assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
@@ -212,7 +212,7 @@ export const tests = [
       assert.match(await text(page, '#f-couple-source-error'), /source is required/);
       await page.click('#save-couple');
       assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
-      await shot(page, '05-edit-validation-errors');
+      await shot(page, '05-edit-validation-errors', '#editor-couple');
       assert.equal(await stored(page), null);
       await page.fill('#f-couple-e0', '0.340');
       await page.fill('#f-couple-source', 'Plant QA measurement, 2026-02');
@@ -349,7 +349,7 @@ export const tests = [
       assert.equal(await page.locator('#import-all').count(), 0);
       assert.equal(await page.evaluate(() => document.activeElement?.id), 'import-summary');
       await fitsWidth(page);
-      await shot(page, '09-import-report-with-rejected-lines');
+      await shot(page, '09-import-report-with-rejected-lines', '#import-check');
       assert.equal(await stored(page), null); // checking changed nothing
       await page.click('#import-valid');
       await waitIdle(page);
@@ -415,7 +415,7 @@ export const tests = [
       await page.fill('#filter-couple', '');
       await page.check('#only-diff-couple');
       assert.deepEqual(await page.locator('#list-couple .row-key').allInnerTexts(), ['Tl+/Tl']);
-      await shot(page, '10-filter-differing-rows');
+      await shot(page, '10-filter-differing-rows', '.tabs');
       await page.uncheck('#only-diff-couple');
       await page.click('#tab-electrodes');
       await page.fill('#filter-electrode', 'calomel');
@@ -446,7 +446,7 @@ export const tests = [
       await page.keyboard.press('Tab');
       await page.keyboard.press('Tab');
       await page.keyboard.type('CRC Handbook, 92nd ed.');
-      await shot(page, '11-keyboard-entry');
+      await shot(page, '11-keyboard-entry', '#editor-couple');
       await page.keyboard.press('Enter'); // submits the form
       await waitIdle(page);
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
@@ -502,7 +502,7 @@ export const tests = [
         elements: document.querySelectorAll('main img, main script, main svg, main b').length,
       }));
       assert.deepEqual(injected, { pwned: null, elements: 0 });
-      await shot(page, '12-hostile-text-shown-as-text');
+      await shot(page, '12-hostile-text-shown-as-text', '#list-couple');
       await page.click('#tab-electrodes');
       assert.ok((await page.locator('#list-electrode').innerText()).includes('<img src=y onerror=window.__pwned=3>'));
       // In the import report.
@@ -601,7 +601,7 @@ export const tests = [
       assert.match(await text(page, '#f-couple-form-error'), /Save again/);
       assert.equal(JSON.parse(await stored(page)).revision, 2);
       await fitsWidth(page);
-      await shot(page, '14-conflict-changed-elsewhere');
+      await shot(page, '14-conflict-changed-elsewhere', '#notice');
       await page.getByRole('button', { name: 'Apply my change to the latest table' }).click();
       await waitIdle(page);
       await page.waitForFunction(() => /Saved couple Cu2\+\/Cu/.test(document.getElementById('notice')?.textContent ?? ''));
@@ -644,7 +644,7 @@ export const tests = [
       await page.fill('#filter-couple', 'C1999H');
       assert.deepEqual(await page.locator('#list-couple .row-key').allInnerTexts(), ['C1999H3998O/C1999H4000O']);
       assert.equal(await cellE0(page, 'C2000H4000O/C2000H4002O'), Number(((2000 % 300) / 100 - 1.5).toFixed(2)));
-      await shot(page, '15-two-thousand-rows-filtered');
+      await shot(page, '15-two-thousand-rows-filtered', '.tabs');
     },
   },
 ];
