@@ -128,6 +128,8 @@ export class TableModel {
     let warning: string | undefined;
     if (host === undefined) {
       warning = 'The worksheet functions do not run in this pane’s page, so they were not told; they read the table when the workbook is next opened.';
+      // Only a change is worth a recalculation (for functions running elsewhere); opening the pane is not.
+      if (!force) return warning;
     } else {
       const st = host.status();
       const same =
@@ -136,6 +138,8 @@ export class TableModel {
         (this.state.kind === 'unreadable' && st.state === 'unreadable');
       if (same && !force) return undefined;
       host.useStoredValue(this.state.raw);
+      // Still reading at start-up: the cells are waiting and will get this table; nothing to recalculate.
+      if (st.state === 'loading' && !force) return undefined;
     }
     try {
       await recalculateAll();

@@ -203,12 +203,12 @@ async function checkElsewhere(): Promise<void> {
         actions: r.retry === undefined ? [] : [{ label: 'Apply my change again', run: () => void act(r.retry!) }],
       });
     }
+    if (r !== null) renderAll();
   } catch {
     // Reading failed (the workbook is busy or closing): the next check tries again.
   } finally {
     ui.busy = false;
   }
-  renderAll();
 }
 
 /* ----------------------------------------------------------------------------------------------- */
@@ -879,11 +879,21 @@ function wireFiles(): void {
   byId('import-report').tabIndex = -1;
 }
 
+/** Re-renders what depends on the table, keeping keyboard focus on the same control when it was re-made. */
 function renderAll(): void {
+  const el = document.activeElement instanceof HTMLElement ? document.activeElement : null;
+  const id = el?.id ?? '';
+  const li = el?.closest<HTMLElement>('li[data-key]') ?? null;
+  const listId = li?.parentElement?.id ?? '';
+  const cls = el?.classList[0] ?? '';
   renderInUse();
   for (const kind of KINDS) renderList(kind);
   const unreadable = model.state.kind === 'unreadable';
-  for (const id of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(id).disabled = unreadable || !ui.ready;
+  for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
+  if (el !== null && !el.isConnected) {
+    if (id !== '' && document.getElementById(id) !== null) byId(id).focus();
+    else if (li !== null && (listId === 'list-couple' || listId === 'list-electrode')) focusRowButton(listId === 'list-couple' ? 'couple' : 'electrode', li.dataset.key ?? null, cls);
+  }
 }
 
 function start(): void {

@@ -107,6 +107,24 @@ describe('round trip', () => {
   });
 });
 
+describe('opening the pane while the functions are still reading the workbook', () => {
+  it('hands the table over without recalculating (the waiting cells get it), and without the channel says so', async () => {
+    file.settings.set(TABLE_SETTING_KEY, writeStoredText({ ...pinnedCopy(B), revision: 3, changedAt: '' }));
+    const given: unknown[] = [];
+    const loadingHost = { apiVersion: 1 as const, status: () => ({ state: 'loading' as const }), useStoredValue: (v: unknown) => (given.push(v), { state: 'workbook' as const }) };
+    const a = new TableModel({ builtin: B, host: () => loadingHost });
+    await a.load();
+    expect(given).toEqual([file.settings.get(TABLE_SETTING_KEY)]);
+    expect(file.calculations).toEqual([]);
+
+    const b = new TableModel({ builtin: B, host: () => undefined });
+    await b.load();
+    const r = await b.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' });
+    expect(r.kind === 'done' && r.warning).toMatch(/do not run in this pane’s page/);
+    expect(file.calculations).toEqual(['Full']); // still recalculated, for functions running elsewhere
+  });
+});
+
 describe('schema upgrade', () => {
   it('a schema-1 table is used as stored, and the next change writes schema 2 without losing its rows', async () => {
     const rows = B.couples.map((c) => (c.key === 'Ag+/Ag' ? { ...c, e0: 0.8 } : c));
