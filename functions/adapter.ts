@@ -691,14 +691,25 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     const rData = idx.map((i) => ranges![i]!.data);
     const rByRow = idx.map((i) => ranges![i]!.rows !== 1);
     const rByCol = idx.map((i) => ranges![i]!.cols !== 1);
+    const memos = idx.map(() => new Map<string, unknown>());
+    const Err = errorClass(); // converters answer errors as CustomFunctions.Error only
     for (let r = 0; r < rows; r++) {
       const line: Cell[] = width ? [] : new Array(cols);
       for (let c = 0; c < cols; c++) {
         let bad: CustomFunctions.Error | null = null;
         for (let j = 0; j < m; j++) {
           const k = idx[j];
-          const v = read(k, rData[j][rByRow[j] ? r : 0][rByCol[j] ? c : 0]);
-          if (bad === null && typeof v === 'object' && v !== null && isErrorValue(v)) bad = v;
+          const raw = rData[j][rByRow[j] ? r : 0][rByCol[j] ? c : 0];
+          let v: unknown;
+          if (typeof raw === 'string') {
+            const memo = memos[j];
+            v = memo.get(raw);
+            if (v === undefined) {
+              v = read(k, raw);
+              if (memo.size < MEMO_LIMIT) memo.set(raw, v);
+            }
+          } else v = read(k, raw);
+          if (bad === null && v instanceof Err) bad = v;
           vals[k] = v;
         }
         if (width) out[r] = bad !== null ? fillRow(bad, width) : computeRow(vals);
@@ -727,6 +738,7 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     out: Cell[][],
   ): Cell[][] => {
     const w = width || cols;
+    const Err = errorClass(); // converters answer errors as CustomFunctions.Error only
     for (let r = 0; r < rows; r++) {
       const line: Cell[] = new Array(w);
       for (let c = 0; c < cols; c++) {
@@ -734,7 +746,7 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
         for (const k of idx) {
           const sh = ranges[k]!;
           const v = read(k, sh.data[sh.rows !== 1 ? r : 0][sh.cols !== 1 ? c : 0]);
-          if (typeof v === 'object' && v !== null && isErrorValue(v)) {
+          if (v instanceof Err) {
             bad = v;
             break;
           }
@@ -761,6 +773,10 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     const check = checks[k];
     const conv = converters[k]!;
     const f = bindAt(compute, n, k, vals);
+    // Texts repeat (keys, formulas, model names): each distinct text is converted once per call.
+    // Within one call the conversion of a text is fixed (the table in use cannot change under it).
+    const memo = new Map<string, unknown>();
+    const Err = errorClass(); // converters answer errors as CustomFunctions.Error only
     for (let r = 0; r < rows; r++) {
       const src = data[byRow ? r : 0];
       const line: Cell[] = new Array(cols);
@@ -769,8 +785,14 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
         let v: unknown;
         if (check !== null && typeof raw === 'number' && raw - raw === 0 && raw !== 0 && inDomain(check, raw)) v = raw;
         else {
-          v = conv(raw);
-          if (typeof v === 'object' && v !== null && isErrorValue(v)) {
+          if (typeof raw === 'string') {
+            v = memo.get(raw);
+            if (v === undefined) {
+              v = conv(raw);
+              if (memo.size < MEMO_LIMIT) memo.set(raw, v);
+            }
+          } else v = conv(raw);
+          if (v instanceof Err) {
             line[c] = v;
             continue;
           }

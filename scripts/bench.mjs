@@ -16,6 +16,7 @@
  * Options: --only name[,name]   run only these cases (names as printed)
  *          --runs N             timed runs per case (default 7)
  *          --json               print the figures as JSON as well
+ *          --no-core            leave out the core loops (for profiling the entry points)
  * Environment: CELLWRIGHT_DIST  another build directory (default dist/)
  *
  * A function that does not exist in the bundle yet is reported as "not yet available".
@@ -25,8 +26,14 @@ import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import v8 from 'node:v8';
 import vm from 'node:vm';
 import zlib from 'node:zlib';
+
+// A full garbage collection before each timed run, so that no run pays for garbage left by the one
+// before it (the entry, core and bare runs allocate the same result arrays).
+v8.setFlagsFromString('--expose-gc');
+const collect = vm.runInNewContext('gc');
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const DIST = process.env.CELLWRIGHT_DIST ? resolve(process.env.CELLWRIGHT_DIST) : resolve(ROOT, 'dist');
@@ -38,6 +45,7 @@ const opt = (name) => {
 const ONLY = opt('--only')?.split(',');
 const RUNS = Number(opt('--runs') ?? 7);
 const JSON_OUT = args.includes('--json');
+const NO_CORE = args.includes('--no-core');
 
 /* ------------------------------------------------------------------------------------------ */
 /* Loading the bundle like the test harness, and the TypeScript core for the table cases      */
@@ -110,23 +118,36 @@ function consume(x) {
   } else sink += typeof x === 'number' ? x : 1;
 }
 
-/** Times `entry` and `bare` alternately: 2 warm-up rounds, then RUNS timed rounds; medians in ms. */
-function race(entry, bare) {
+/**
+ * Times `entry`, `core` (optional) and `bare` in turn: 2 warm-up rounds, then RUNS timed rounds;
+ * medians in ms.
+ */
+function race(entry, bare, core) {
   for (let i = 0; i < 2; i++) {
     consume(entry());
+    if (core) consume(core());
     consume(bare());
   }
   const te = [];
+  const tc = [];
   const tb = [];
   for (let i = 0; i < RUNS; i++) {
+    collect();
     let t = now();
     consume(entry());
     te.push(now() - t);
+    if (core) {
+      collect();
+      t = now();
+      consume(core());
+      tc.push(now() - t);
+    }
+    collect();
     t = now();
     consume(bare());
     tb.push(now() - t);
   }
-  return { entryMs: median(te), bareMs: median(tb) };
+  return { entryMs: median(te), bareMs: median(tb), ...(core ? { coreMs: median(tc) } : {}) };
 }
 
 /* ------------------------------------------------------------------------------------------ */
@@ -151,7 +172,7 @@ function grid(rows, cols, f) {
   return out;
 }
 
-/** A bare element-wise map producing the same 2-D shape as the input. */
+/** An element-wise map producing the same 2-D shape as the input (for the core loops). */
 function mapGrid(input, f) {
   const rows = input.length;
   const out = new Array(rows);
@@ -182,15 +203,28 @@ function report(name, what, r, target) {
   const ratio = r.bareMs / r.entryMs;
   r.ratio = ratio;
   const met = target === undefined ? '' : ratio >= target ? `  target ≥ ${target}: met` : `  target ≥ ${target}: MISSED`;
-  console.log(
-    `${name.padEnd(18)} ${what}: entry ${r.entryMs.toFixed(2)} ms, bare ${r.bareMs.toFixed(2)} ms, ratio ${ratio.toFixed(2)}${met}`,
-  );
+  const core = r.coreMs === undefined ? '' : `, core loop ${r.coreMs.toFixed(2)} ms (adapter overhead ${(r.entryMs / r.coreMs).toFixed(2)}×)`;
+  console.log(`${name.padEnd(18)} ${what}: entry ${r.entryMs.toFixed(2)} ms, bare ${r.bareMs.toFixed(2)} ms${core}, ratio ${ratio.toFixed(2)}${met}`);
 }
 
-function caseRange(name, what, fn, target, entry, bare) {
+function caseRange(name, what, fn, target, entry, bare, core) {
   if (ONLY && !ONLY.includes(name)) return;
   if (!fn) return report(name, what, { unavailable: `no ${name.split('-')[0].toUpperCase()} in the bundle` }, target);
-  report(name, what, race(entry, bare), target);
+  report(name, what, race(entry, bare, core && !NO_CORE ? loadCore(core) : undefined), target);
+}
+
+/**
+ * The "core loop": the same core function the worksheet function calls (src/, transpiled on the
+ * fly, run outside node:vm), called per element in a bare loop over the same input. entry/core is
+ * the adapter's own overhead; core/bare is what the core does beyond the bare arithmetic.
+ * Returns undefined when the core module cannot be loaded.
+ */
+function loadCore(make) {
+  try {
+    return make();
+  } catch {
+    return undefined;
+  }
 }
 
 function main() {
@@ -221,7 +255,18 @@ function main() {
       () => fn(cell(e0), cell(n), Q, null, INVOCATION),
       () => {
         const k = (R * (25 + T0)) / (n * F);
-        return mapGrid(Q, (q) => e0 - k * Math.log(q));
+        const out = new Array(Q.length);
+        for (let r = 0; r < Q.length; r++) {
+          const src = Q[r];
+          const row = new Array(src.length);
+          for (let c = 0; c < src.length; c++) row[c] = e0 - k * Math.log(src[c]);
+          out[r] = row;
+        }
+        return out;
+      },
+      () => {
+        const { nernst } = requireTs('src/nernst/nernst.ts');
+        return () => mapGrid(Q, (q) => nernst(e0, n, q, 25));
       },
     );
   }
@@ -241,7 +286,23 @@ function main() {
       () => fn(cathodes, cell(anode), null, INVOCATION),
       () => {
         const ea = e0ByKey.get(anode);
-        return mapGrid(cathodes, (k) => e0ByKey.get(k) - ea);
+        const out = new Array(cathodes.length);
+        for (let r = 0; r < cathodes.length; r++) {
+          const src = cathodes[r];
+          const row = new Array(src.length);
+          for (let c = 0; c < src.length; c++) row[c] = e0ByKey.get(src[c]) - ea;
+          out[r] = row;
+        }
+        return out;
+      },
+      () => {
+        const table = requireTs('src/table/builtin.ts').builtinTable();
+        const { e0AtTemperature } = requireTs('src/cells/e0AtTemperature.ts');
+        const { emf } = requireTs('src/cells/emf.ts');
+        return () => {
+          const a = table.findCouple(anode);
+          return mapGrid(cathodes, (k) => emf(e0AtTemperature(table.findCouple(k), 25), e0AtTemperature(a, 25)));
+        };
       },
     );
   }
@@ -261,10 +322,22 @@ function main() {
       () => fn(cell(key), null, null, pH, null, INVOCATION),
       () => {
         const k = (R * (25 + T0) * LN10) / F;
-        return mapGrid(pH, (p) => {
-          const row = rows.get(key);
-          return row.e0 - ((k * row.h) / row.n) * p;
-        });
+        const out = new Array(pH.length);
+        for (let r = 0; r < pH.length; r++) {
+          const src = pH[r];
+          const line = new Array(src.length);
+          for (let c = 0; c < src.length; c++) {
+            const row = rows.get(key);
+            line[c] = row.e0 - ((k * row.h) / row.n) * src[c];
+          }
+          out[r] = line;
+        }
+        return out;
+      },
+      () => {
+        const row = requireTs('src/table/builtin.ts').builtinTable().findCouple(key);
+        const { halfCell } = requireTs('src/nernst/halfCell.ts');
+        return () => mapGrid(pH, (p) => halfCell(row, null, null, p, 25));
       },
     );
   }
@@ -280,7 +353,20 @@ function main() {
       fn,
       0.5,
       () => fn(I, cell(1), cell('Cu'), cell(2), null, INVOCATION),
-      () => mapGrid(I, (i) => (i * 1 * 3600 * M) / (2 * F)),
+      () => {
+        const out = new Array(I.length);
+        for (let r = 0; r < I.length; r++) {
+          const src = I[r];
+          const row = new Array(src.length);
+          for (let c = 0; c < src.length; c++) row[c] = (src[c] * 1 * 3600 * M) / (2 * F);
+          out[r] = row;
+        }
+        return out;
+      },
+      () => {
+        const { depositMass } = requireTs('src/faraday/depositMass.ts');
+        return () => mapGrid(I, (i) => depositMass(i, 1, 'Cu', 2, 1));
+      },
     );
   }
 
@@ -295,11 +381,24 @@ function main() {
       fn,
       0.5,
       () => fn(cell(2), I, null, null, null, INVOCATION),
-      () =>
-        mapGrid(I, (is) => {
-          const s = Math.sqrt(is);
-          return 10 ** (-A * 4 * (s / (1 + s) - 0.3 * is));
-        }),
+      () => {
+        const out = new Array(I.length);
+        for (let r = 0; r < I.length; r++) {
+          const src = I[r];
+          const row = new Array(src.length);
+          for (let c = 0; c < src.length; c++) {
+            const is = src[c];
+            const s = Math.sqrt(is);
+            row[c] = 10 ** (-A * 4 * (s / (1 + s) - 0.3 * is));
+          }
+          out[r] = row;
+        }
+        return out;
+      },
+      () => {
+        const { activityCoef } = requireTs('src/solutions/activityCoef.ts');
+        return () => mapGrid(I, (is) => activityCoef(2, is, 'DAVIES', 25, null));
+      },
     );
   }
 
