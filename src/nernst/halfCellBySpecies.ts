@@ -15,8 +15,8 @@ import type { CoupleRow } from '../table/types';
  * Example: halfCellBySpecies(permanganate, ["MnO4-", "Mn2+", "H+"], [0.1, 0.01, 1e-3], 25)
  * See also: halfCell
  *
- * @throws InputError when the lists differ in length, a name is not a species, or a species is named twice
- * @throws NotFoundError naming a species that is not in the half-reaction
+ * @throws InputError when the lists differ in length or a species is named twice
+ * @throws NotFoundError naming a species that is not in the half-reaction (or is not a species at all)
  * @throws DomainError for an activity ≤ 0 or T outside 0…100 °C
  */
 export function halfCellBySpecies(row: CoupleRow, species: readonly string[], activities: readonly number[], temperatureC: number): number {
@@ -25,7 +25,13 @@ export function halfCellBySpecies(row: CoupleRow, species: readonly string[], ac
   }
   const given = new Map<string, number>();
   species.forEach((name, i) => {
-    const key = parseSpecies(name).key;
+    let key: string;
+    try {
+      key = parseSpecies(name).key;
+    } catch {
+      // text that is not a species at all cannot be in the half-reaction either
+      throw new NotFoundError(`"${name.trim()}" is not a species of the half-reaction of ${row.key} (${row.halfReaction})`);
+    }
     if (!row.parsed.species.some((t) => t.species.key === key)) {
       throw new NotFoundError(`"${name.trim()}" is not in the half-reaction of ${row.key} (${row.halfReaction})`);
     }

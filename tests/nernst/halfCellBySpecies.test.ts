@@ -39,10 +39,11 @@ describe('halfCellBySpecies', () => {
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['e-'], [1], 25)).toThrow(NotFoundError);
   });
 
-  it('refuses unequal lists, repeated names, unreadable names and activities ≤ 0', () => {
+  it('refuses unequal lists, repeated names and activities ≤ 0; an unreadable or unknown-element name is not in the half-reaction (#N/A)', () => {
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+', 'Cu'], [1], 25)).toThrow(InputError);
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+', 'Cu(2+)'], [1, 2], 25)).toThrow(/named twice/);
-    expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+?'], [1], 25)).toThrow(InputError);
+    expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+?'], [1], 25)).toThrow(NotFoundError);
+    expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Xx2+'], [1], 25)).toThrow(/"Xx2\+" is not a species of the half-reaction of Cu2\+\/Cu/);
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+'], [0], 25)).toThrow(DomainError);
   });
 });
