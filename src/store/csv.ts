@@ -20,7 +20,8 @@
  * row_type, key, potential_V and source are required, an unknown column makes the whole file refused.
  *
  * Spreadsheet programs run a cell that starts with = + - or @ as a formula, so the export writes such
- * text with a leading apostrophe and the import removes it again.
+ * text with a leading apostrophe and the import removes it again (text that starts with an apostrophe
+ * gets one more, so every text reads back exactly).
  */
 import type { CoupleRecord, ElectrodeRecord } from '../table/records';
 import { validateCoupleRecord, validateElectrodeRecord } from '../table/table';
@@ -131,14 +132,18 @@ function isSkipped(r: RawRecord): boolean {
 
 const FORMULA_START = /^[=+\-@\t\r]/;
 
-/** Removes the apostrophe the export puts before text that would start a formula. */
+/** Removes the apostrophe the export puts before text that would start a formula or starts with an apostrophe. */
 function unguard(s: string): string {
-  return s.startsWith("'") && FORMULA_START.test(s.slice(1)) ? s.slice(1) : s;
+  return s.startsWith("'") && (FORMULA_START.test(s.slice(1)) || s[1] === "'") ? s.slice(1) : s;
 }
 
-/** Text for a CSV cell that a spreadsheet program will not run as a formula. */
+/**
+ * Text for a CSV cell that a spreadsheet program will not run as a formula: a leading apostrophe before
+ * = + - @ (and before a text that itself starts with an apostrophe, so that unguard gives back exactly
+ * what was written).
+ */
 function guard(s: string): string {
-  return FORMULA_START.test(s) ? `'${s}` : s;
+  return FORMULA_START.test(s) || s.startsWith("'") ? `'${s}` : s;
 }
 
 function parseNumber(text: string, column: string, decimalComma: boolean): number | string {

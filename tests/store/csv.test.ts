@@ -24,6 +24,8 @@ describe('CSV layout 1', () => {
     const rows = [
       { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.34, source: '=HYPERLINK("http://x","y")', note: '<img src=x onerror=alert(1)>, "quoted"\nsecond line' },
       { key: 'Ag+/Ag', halfReaction: 'Ag+ + e- -> Ag', e0: 0.7996, source: '+1 lab, @team', note: '-minus start' },
+      { key: 'Zn2+/Zn', halfReaction: 'Zn2+ + 2e- -> Zn', e0: -0.7618, source: "'=already quoted", note: "''two apostrophes" },
+      { key: 'Ni2+/Ni', halfReaction: 'Ni2+ + 2e- -> Ni', e0: -0.257, source: "'plain apostrophe" },
     ];
     const text = exportCsv({ couples: rows, electrodes: [] }, 'test');
     expect(text).not.toMatch(/^=|,=|,\+|,@/m); // no cell starts a formula
