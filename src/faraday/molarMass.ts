@@ -14,6 +14,19 @@ import { atomicWeight } from './atomicWeight';
  * See also: atomicWeight, ecEquiv
  */
 export function molarMass(formula: string): number {
+  // A range of DEPOSITMASS calls names the same few formulas over and over: parse each once.
+  const known = MOLAR_MASSES.get(formula);
+  if (known !== undefined) return known;
+  const m = computeMolarMass(formula);
+  if (MOLAR_MASSES.size >= 1000) MOLAR_MASSES.clear();
+  MOLAR_MASSES.set(formula, m);
+  return m;
+}
+
+/** Molar masses already computed, by formula text as given (only successes are kept). */
+const MOLAR_MASSES = new Map<string, number>();
+
+function computeMolarMass(formula: string): number {
   let elements: Readonly<Record<string, number>>;
   try {
     const sp = parseSpecies(formula);

@@ -14,6 +14,7 @@ const MODELS: readonly ActivityModel[] = ['DHLL', 'EDH', 'DAVIES'];
  * See also: log10ActivityCoef
  */
 export function activityModel(name: string): ActivityModel {
+  if (name === 'DAVIES' || name === 'EDH' || name === 'DHLL') return name; // as written in the docs: no clean-up needed
   const bare = name.replace(/\s+/g, '').toUpperCase();
   const found = MODELS.find((m) => m === bare);
   if (found === undefined) {

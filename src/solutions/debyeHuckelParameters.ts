@@ -50,6 +50,18 @@ export interface DebyeHuckelParameters {
  * See also: activityCoef, meanActivityCoef
  */
 export function debyeHuckelParameters(temperatureC: number): DebyeHuckelParameters {
+  // A range of ACTIVITYCOEF calls is usually at one temperature: keep the last answer.
+  if (temperatureC === lastTemperatureC && lastParameters !== null) return lastParameters;
+  const p = computeParameters(temperatureC);
+  lastTemperatureC = temperatureC;
+  lastParameters = p;
+  return p;
+}
+
+let lastTemperatureC = Number.NaN;
+let lastParameters: DebyeHuckelParameters | null = null;
+
+function computeParameters(temperatureC: number): DebyeHuckelParameters {
   if (!(temperatureC >= DEBYE_HUCKEL_RANGE_C.min && temperatureC <= DEBYE_HUCKEL_RANGE_C.max)) {
     throw new DomainError(`Debye–Hückel parameters are available from ${DEBYE_HUCKEL_RANGE_C.min} to ${DEBYE_HUCKEL_RANGE_C.max} °C`);
   }
@@ -59,5 +71,5 @@ export function debyeHuckelParameters(temperatureC: number): DebyeHuckelParamete
   const bjerrum = (ELEMENTARY_CHARGE_C * ELEMENTARY_CHARGE_C) / (4 * Math.PI * eps0 * epsR * BOLTZMANN_J_PER_K * kelvin(temperatureC));
   const B = Math.sqrt(8 * Math.PI * AVOGADRO_PER_MOL * rho * bjerrum) * M_PER_ANGSTROM;
   const A = (Math.sqrt(2 * Math.PI * AVOGADRO_PER_MOL * rho) * Math.pow(bjerrum, 1.5)) / LN10;
-  return { A, B, dielectricConstant: epsR, density_kg_m3: rho };
+  return Object.freeze({ A, B, dielectricConstant: epsR, density_kg_m3: rho });
 }
