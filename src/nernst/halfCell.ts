@@ -39,17 +39,17 @@ export function halfCell(
   if (!(aOx > 0) || !(aRed > 0)) throw new DomainError('activities must be > 0');
   const e0 = e0AtTemperature(row, temperatureC);
   let aH = 1;
-  let aOH = 1;
+  let aOH = pH === null || pH === undefined ? 1 : NaN; // NaN: from pH and Kw(T), when an OH- term needs it
   if (pH !== null && pH !== undefined) {
     if (!Number.isFinite(pH)) throw new DomainError('pH must be a finite number');
     aH = Math.pow(10, -pH);
-    aOH = Math.exp((pH - waterPKw(temperatureC)) * LN10);
   }
   const activity = (t: HalfReactionTerm): number => {
     switch (speciesState(t.species, t.phase)) {
       case 'H+':
         return aH;
       case 'OH-':
+        if (Number.isNaN(aOH)) aOH = Math.exp(((pH as number) - waterPKw(temperatureC)) * LN10);
         return aOH;
       case 'water':
       case 'solid':
