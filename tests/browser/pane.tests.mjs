@@ -143,6 +143,18 @@ export const tests = [
       assert.match(await text(page, '.app-footer'), /H2.*Cl2.*HCN.*cyanide.*chromium\(VI\).*local codes/);
       await fitsWidth(page);
       await labelled(page);
+      // A strict Content-Security-Policy, and nothing inline it would have to allow.
+      const page0 = await page.evaluate(() => ({
+        csp: document.querySelector('meta[http-equiv="Content-Security-Policy"]')?.getAttribute('content') ?? '',
+        inlineScripts: [...document.scripts].filter((sc) => !sc.src).length,
+        styled: document.querySelectorAll('[style]').length,
+        handlers: [...document.querySelectorAll('*')].filter((e) => [...e.attributes].some((a) => /^on/i.test(a.name))).length,
+        scripts: [...document.scripts].map((sc) => new URL(sc.src).pathname),
+      }));
+      for (const d of ["default-src 'self'", "script-src 'self'", "style-src 'self'", "object-src 'none'", "base-uri 'none'"]) assert.ok(page0.csp.includes(d), `CSP lacks ${d}`);
+      assert.doesNotMatch(page0.csp, /unsafe|\*/);
+      assert.deepEqual({ inline: page0.inlineScripts, styled: page0.styled, handlers: page0.handlers }, { inline: 0, styled: 0, handlers: 0 });
+      assert.deepEqual(page0.scripts, ['/office-js/office.js', '/functions.js', '/taskpane.js']);
       await shot(page, '01-built-in-table-in-use');
       await page.click('#tab-about');
       const about = await text(page, '#panel-about');
@@ -228,6 +240,32 @@ export const tests = [
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
       assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
       assert.equal(JSON.parse(await stored(page)).revision, 1);
+    },
+  },
+
+  {
+    name: 'edit a reference electrode: other names one per line, a name in use and a "|" are refused',
+    async run({ open }) {
+      const page = await openPane(open);
+      await page.click('#tab-electrodes');
+      await page.fill('#filter-electrode', 'SSCE');
+      await row(page, 'electrode', 'SSCE').getByRole('button', { name: 'Edit SSCE' }).click();
+      assert.match(await text(page, '#editor-electrode-title'), /Edit reference electrode SSCE/);
+      await page.fill('#f-electrode-aliases', 'saturated calomel');
+      assert.match(await text(page, '#f-electrode-aliases-error'), /another electrode already uses the name saturated calomel/i);
+      await page.fill('#f-electrode-aliases', 'sodium calomel|x');
+      assert.match(await text(page, '#f-electrode-aliases-error'), /cannot hold "\|"/);
+      await page.fill('#f-electrode-aliases', 'sodium calomel\nbench SSCE');
+      await page.fill('#f-electrode-potential', '0.2371');
+      await page.fill('#f-electrode-source', 'Plant reference check, 2026');
+      await page.click('#save-electrode');
+      await waitIdle(page);
+      await page.waitForSelector('#editor-electrode', { state: 'hidden' });
+      const e = JSON.parse(await stored(page)).electrodes.find((x) => x.key === 'SSCE');
+      assert.deepEqual(e.aliases, ['sodium calomel', 'bench SSCE']);
+      assert.equal(e.potential, 0.2371);
+      assert.match(await row(page, 'electrode', 'SSCE').innerText(), /\+0\.2371 V[\s\S]*also: sodium calomel, bench SSCE[\s\S]*Edited here: other names, potential, source/);
+      assert.equal(await page.evaluate(() => document.activeElement?.getAttribute('aria-label')), 'Edit SSCE');
     },
   },
 
