@@ -364,7 +364,7 @@ async function resetTable(): Promise<void> {
       ? ['The workbook’s stored table cannot be read. Resetting removes it for good and the worksheet functions use the add-in’s built-in table again.', 'Download the stored text first if you may need it.']
       : [
           'This removes the workbook’s own table. The worksheet functions then use the add-in’s built-in table, which can change when the add-in is updated.',
-          diffs.length === 0 ? 'No row differs from the built-in table.' : `${plural(diffs.length, 'row')} that differ from the built-in table will be lost:`,
+          diffs.length === 0 ? 'No row differs from the built-in table.' : `${plural(diffs.length, 'row')} that ${diffs.length === 1 ? 'differs' : 'differ'} from the built-in table will be lost:`,
         ],
     list: unreadable ? [] : diffs.map(describeDifference),
     ok: 'Reset',
@@ -462,7 +462,7 @@ function renderList(kind: RowKind): void {
   const what = kind === 'couple' ? 'couple' : 'electrode';
   let text: string;
   if (filter === '' && !onlyDiff) text = `${plural(rows.length, what)}.`;
-  else text = `${plural(shown.length, what)} match of ${rows.length.toLocaleString('en-US')}.`;
+  else text = `${shown.length.toLocaleString('en-US')} of ${plural(rows.length, what)} ${shown.length === 1 ? 'matches' : 'match'}.`;
   if (shown.length > MAX_SHOWN) text += ` Showing the first ${MAX_SHOWN}; narrow the filter to see the others.`;
   replace(count, text);
   list.setAttribute('aria-label', `${kind === 'couple' ? 'Couples' : 'Reference electrodes'}: ${plural(Math.min(shown.length, MAX_SHOWN), 'row')} shown`);

@@ -315,7 +315,7 @@ export const tests = [
       await addCouple(page, { halfReaction: 'Tl+ + e- -> Tl', key: 'Tl+/Tl', e0: '-0.336', source: 'lab' });
       const before = await stored(page);
       await page.click('#reset');
-      assert.match(await text(page, '#confirm'), /Reset to the built-in table\?.*1 row that differ.*couple Tl\+\/Tl: added/);
+      assert.match(await text(page, '#confirm'), /Reset to the built-in table\?.*1 row that differs from the built-in table will be lost: couple Tl\+\/Tl: added/);
       await shot(page, '07-confirm-reset');
       await confirmDialog(page, false);
       assert.equal(await stored(page), before);
@@ -447,7 +447,7 @@ export const tests = [
       const keys = await page.locator('#list-couple .row-key').allInnerTexts();
       assert.ok(keys.length >= 3 && keys.length < couplesFile.couples.length, `${keys.length} rows for "fe"`);
       for (const li of await page.locator('#list-couple > li').allInnerTexts()) assert.match(li.toLowerCase(), /fe/);
-      assert.match(await text(page, '#count-couple'), new RegExp(`^${keys.length} couples? match of ${couplesFile.couples.length + 1}\\.`));
+      assert.match(await text(page, '#count-couple'), new RegExp(`^${keys.length} of ${couplesFile.couples.length + 1} couples match\\.`));
       await page.fill('#filter-couple', 'CRC');
       assert.ok((await page.locator('#list-couple > li').count()) > 10); // matches sources too
       await page.fill('#filter-couple', '');
