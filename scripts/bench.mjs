@@ -36,7 +36,16 @@ import zlib from 'node:zlib';
 // A full garbage collection before each timed run, so that no run pays for garbage left by the one
 // before it (the entry, core and bare runs allocate the same result arrays).
 v8.setFlagsFromString('--expose-gc');
-const collect = vm.runInNewContext('gc');
+const fullGc = vm.runInNewContext('gc');
+const pause = new Int32Array(new SharedArrayBuffer(4));
+/**
+ * A full collection, then a short sleep so that V8's background threads finish sweeping: else the
+ * next timed run (whichever it is) pays for freeing what the previous one left.
+ */
+function collect() {
+  fullGc();
+  Atomics.wait(pause, 0, 0, 25);
+}
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const DIST = process.env.CELLWRIGHT_DIST ? resolve(process.env.CELLWRIGHT_DIST) : resolve(ROOT, 'dist');
@@ -49,6 +58,14 @@ const ONLY = opt('--only')?.split(',');
 const RUNS = Number(opt('--runs') ?? 7);
 const JSON_OUT = args.includes('--json');
 const NO_CORE = args.includes('--no-core');
+/** Set in the child process that runs one case (each case runs in a fresh process of its own). */
+const ISOLATED = args.includes('--isolated');
+/** In a child: the one part of the case to time (entry, core or bare). */
+const PART = opt('--part');
+/** Processes per part of a case (their medians' median is reported). */
+const REPS = Number(opt('--reps') ?? 3);
+/** The cases that run in processes of their own, in this order. */
+const CASES = ['nernst-range', 'emf-range', 'halfcell-range', 'depositmass-range', 'activitycoef-range', 'nernst-scalar', 'table-lookup'];
 
 /* ------------------------------------------------------------------------------------------ */
 /* Loading the bundle like the test harness, and the TypeScript core for the table cases      */
@@ -86,6 +103,17 @@ function loadBundle(code = readFileSync(resolve(DIST, 'functions.js'), 'utf8'), 
   vm.runInContext(code, sandbox, { filename: 'functions.js' });
   registered.sandbox = sandbox;
   return registered;
+}
+
+/**
+ * Lets the TypeScript compiler go once the core modules are loaded: it holds some 100 MB of heap,
+ * and a heap that size makes every garbage collection during the timed runs slower (the entry
+ * points allocate more than the bare loops, so they would pay most of it).
+ */
+function releaseTs() {
+  const require = createRequire(import.meta.url);
+  delete require.extensions['.ts'];
+  for (const k of Object.keys(require.cache)) if (k.includes(`${'/node_modules/typescript/'}`)) delete require.cache[k];
 }
 
 /** Requires a TypeScript module of src/ (transpiled on the fly; no build step, no extra dependency). */
@@ -142,6 +170,21 @@ function consume(x) {
  * medians in ms.
  */
 function race(entry, bare, core) {
+  if (PART !== undefined) {
+    // a child timing one part: 2 warm-up runs, then RUNS timed runs, each after a full collection
+    const thunk = { entry, bare, core }[PART];
+    if (thunk === undefined) return {};
+    consume(thunk());
+    consume(thunk());
+    const ts = [];
+    for (let i = 0; i < RUNS; i++) {
+      collect();
+      const t = clock();
+      consume(thunk());
+      ts.push(clock() - t);
+    }
+    return { [`${PART}Ms`]: median(ts) };
+  }
   for (let i = 0; i < 2; i++) {
     consume(entry());
     if (core) consume(core());
@@ -218,22 +261,96 @@ const couplesData = JSON.parse(readFileSync(resolve(ROOT, 'data/couples.json'), 
 const coupleRecords = couplesData.couples ?? [];
 
 const results = [];
+/** Records a case's figures, and prints them unless this process times one part for a parent. */
 function report(name, what, r, target) {
-  results.push({ name, what, ...r, target });
+  const entry = { name, what, ...r, target };
+  results.push(entry);
+  if (PART === undefined) printCase(entry);
+}
+
+/** The line of one case. */
+function printCase(r) {
+  const { name, what, target } = r;
   if (r.unavailable) {
     console.log(`${name.padEnd(18)} ${what}: not yet available (${r.unavailable})`);
     return;
   }
-  const ratio = r.ratio;
-  const met = target === undefined ? '' : ratio >= target ? `  target ≥ ${target}: met` : `  target ≥ ${target}: MISSED`;
+  if (name === 'nernst-scalar') {
+    const perCallUs = (r.entryMs * 1000) / r.calls;
+    r.perCallUs = perCallUs;
+    console.log(
+      `${name.padEnd(18)} ${what}: ${r.entryMs.toFixed(2)} ms = ${perCallUs.toFixed(3)} µs/call (bare ${r.bareMs.toFixed(2)} ms)  target < 1 µs: ${perCallUs < 1 ? 'met' : 'MISSED'}`,
+    );
+    return;
+  }
+  if (name === 'table-lookup') {
+    const nsBig = (r.entryMs * 1e6) / r.lookups;
+    const nsBuiltin = (r.bareMs * 1e6) / r.lookups;
+    Object.assign(r, { nsBig, nsBuiltin });
+    console.log(
+      `${name.padEnd(18)} findCouple: ${r.rows}-row table ${nsBig.toFixed(0)} ns, built-in (${r.builtinRows} rows) ${nsBuiltin.toFixed(0)} ns per look-up; ratio ${r.ratio.toFixed(2)} (1.0 = cost does not grow with size)`,
+    );
+    return;
+  }
+  const met = target === undefined ? '' : r.ratio >= target ? `  target ≥ ${target}: met` : `  target ≥ ${target}: MISSED`;
   const core = r.coreMs === undefined ? '' : `, core loop ${r.coreMs.toFixed(2)} ms (entry/core ${r.coreRatio.toFixed(2)})`;
-  console.log(`${name.padEnd(18)} ${what}: entry ${r.entryMs.toFixed(2)} ms, bare ${r.bareMs.toFixed(2)} ms${core}, ratio ${ratio.toFixed(2)}${met}`);
+  console.log(`${name.padEnd(18)} ${what}: entry ${r.entryMs.toFixed(2)} ms, bare ${r.bareMs.toFixed(2)} ms${core}, ratio ${r.ratio.toFixed(2)}${met}`);
+}
+
+/**
+ * Runs one case in separate processes, one per part (entry, core loop, bare loop), REPS times in
+ * turn, and reports the median of each part's medians. Timing the parts in processes of their own
+ * keeps them from bending each other's figures: in one process the JIT state and the heap one
+ * part leaves behind (feedback, optimized helpers, tenured arrays) made the same loop run 2 to 5
+ * times slower or faster depending on what ran before it.
+ */
+function runCase(name, pass) {
+  const parts = NO_CORE ? ['entry', 'bare'] : ['entry', 'core', 'bare'];
+  const got = { entry: [], core: [], bare: [] };
+  let info = null;
+  for (let rep = 0; rep < REPS; rep++) {
+    for (const part of parts) {
+      const r = spawnSync(process.execPath, [fileURLToPath(import.meta.url), '--isolated', '--only', name, '--part', part, ...pass], {
+        cwd: ROOT,
+        encoding: 'utf8',
+        env: process.env,
+      });
+      const line = r.stdout.split('\n').find((l) => l.startsWith('RESULT '));
+      if (r.status !== 0 || line === undefined) {
+        console.log(`${name.padEnd(18)} failed: ${r.stderr.split('\n').find((l) => l.trim() !== '') ?? r.status}`);
+        return;
+      }
+      const [res] = JSON.parse(line.slice(7));
+      if (res.unavailable) {
+        printCase(res);
+        results.push(res);
+        return;
+      }
+      const ms = res[`${part}Ms`];
+      if (ms !== undefined) got[part].push(ms);
+      info = { ...res, ...info };
+    }
+  }
+  const { entryMs, coreMs, bareMs, ...rest } = info;
+  void entryMs;
+  void coreMs;
+  void bareMs;
+  const r = { ...rest, entryMs: median(got.entry), bareMs: median(got.bare) };
+  r.ratio = r.bareMs / r.entryMs;
+  if (got.core.length > 0) {
+    r.coreMs = median(got.core);
+    r.coreRatio = r.entryMs / r.coreMs;
+  }
+  results.push(r);
+  printCase(r);
 }
 
 function caseRange(name, what, fn, target, entry, bare, core) {
   if (ONLY && !ONLY.includes(name)) return;
   if (!fn) return report(name, what, { unavailable: `no ${name.split('-')[0].toUpperCase()} in the bundle` }, target);
-  report(name, what, race(entry, bare, core && !NO_CORE ? loadCore(core) : undefined), target);
+  const coreLoop = core && !NO_CORE && (PART === undefined || PART === 'core') ? loadCore(core) : undefined;
+  releaseTs();
+  report(name, what, race(entry, bare, coreLoop), target);
 }
 
 /**
@@ -258,10 +375,22 @@ function main() {
   }
   const cpu = (readFileSync('/proc/cpuinfo', 'utf8').match(/model name\s*:\s*(.*)/) ?? [])[1] ?? 'unknown CPU';
   const cores = (readFileSync('/proc/cpuinfo', 'utf8').match(/^processor\s*:/gm) ?? []).length;
-  console.log(`Cellwright benchmark — ${new Date().toISOString().slice(0, 10)}, Node ${process.version}, ${cores} cores, ${cpu}`);
-  console.log(
-    `median of ${RUNS} runs after 2 warm-up runs, ${CPU ? 'CPU' : 'wall-clock'} time; ratio = bare loop / worksheet entry point (1.0 = no overhead), median of the rounds' ratios\n`,
-  );
+  if (!ISOLATED) {
+    // Each case in a fresh process: the JIT state one case leaves behind (feedback, deoptimized
+    // helpers, a heap full of old results) must not bend the figures of the next.
+    const load = () => readFileSync('/proc/loadavg', 'utf8').split(' ').slice(0, 3).join(' ');
+    console.log(`Cellwright benchmark — ${new Date().toISOString().slice(0, 10)}, Node ${process.version}, ${cores} cores, ${cpu}, load average ${load()}`);
+    process.on('exit', () => console.log(`\nload average at the end: ${load()} (other work on the machine disturbs the figures; compare ratios, not times)`));
+    console.log(
+      `each part (entry point, core loop, bare loop) timed in ${REPS} fresh processes: median of ${RUNS} runs after 2 warm-up runs, ${CPU ? 'CPU' : 'wall-clock'} time, median over the processes; ratio = bare loop / entry point (1.0 = no overhead)\n`,
+    );
+    const pass = args.filter((a, i) => a !== '--only' && args[i - 1] !== '--only' && a !== '--json');
+    for (const name of CASES.filter((c) => !ONLY || ONLY.includes(c))) runCase(name, pass);
+    if (!ONLY || ONLY.includes('cold-start')) coldStart();
+    sizes();
+    if (JSON_OUT) console.log(JSON.stringify({ date: new Date().toISOString(), node: process.version, cpu, cores, results }, null, 1));
+    return;
+  }
 
   const fns = loadBundle();
   const get = (id) => fns.get(id);
@@ -430,7 +559,7 @@ function main() {
   // 100,000 separate scalar NERNST calls (Excel's per-cell path: every argument a 1×1 array).
   if (!ONLY || ONLY.includes('nernst-scalar')) {
     const fn = get('NERNST');
-    if (!fn) report('nernst-scalar', '100000 scalar calls', { unavailable: 'no NERNST in the bundle' });
+    if (!fn) report('nernst-scalar', '100000 scalar NERNST calls', { unavailable: 'no NERNST in the bundle' });
     else {
       const N = 100000;
       const qs = Array.from({ length: N }, (_, i) => [[10 ** ((i % 1200) / 100 - 6)]]);
@@ -449,38 +578,34 @@ function main() {
           return s;
         },
       );
-      const perCallUs = (r.entryMs * 1000) / N;
-      results.push({ name: 'nernst-scalar', what: '100000 scalar calls', ...r, perCallUs, targetUs: 1 });
-      console.log(
-        `${'nernst-scalar'.padEnd(18)} 100000 scalar NERNST calls: ${r.entryMs.toFixed(2)} ms = ${perCallUs.toFixed(3)} µs/call (bare ${r.bareMs.toFixed(2)} ms)  target < 1 µs: ${perCallUs < 1 ? 'met' : 'MISSED'}`,
-      );
+      report('nernst-scalar', '100000 scalar NERNST calls', { ...r, calls: N }, undefined);
     }
   }
 
   // Look-up in a 10,000-row table against the built-in table (the core's findCouple).
   if (!ONLY || ONLY.includes('table-lookup')) tableLookup();
 
-  // Cold start, in fresh processes.
-  if (!ONLY || ONLY.includes('cold-start')) coldStart();
-
-  // Bundle sizes.
-  if (!ONLY || ONLY.includes('sizes')) {
-    for (const f of ['functions.js', 'taskpane.js']) {
-      const p = resolve(DIST, f);
-      if (!existsSync(p)) {
-        console.log(`${'size'.padEnd(18)} ${f}: missing`);
-        continue;
-      }
-      const raw = readFileSync(p);
-      const gz = zlib.gzipSync(raw, { level: 9 }).length;
-      results.push({ name: `size ${f}`, bytes: raw.length, gzipBytes: gz });
-      const target = f === 'functions.js' ? `  target < 60 KB: ${gz < 60 * 1024 ? 'met' : 'MISSED'}` : '';
-      console.log(`${'size'.padEnd(18)} ${f}: ${(raw.length / 1024).toFixed(1)} KB, gzipped ${(gz / 1024).toFixed(1)} KB${target}`);
-    }
-  }
-
-  if (JSON_OUT) console.log(JSON.stringify({ date: new Date().toISOString(), node: process.version, cpu, cores, results }, null, 1));
+  console.log(`RESULT ${JSON.stringify(results)}`);
   if (sink === 42) console.log(''); // keeps `sink` observable
+}
+
+/** Gzipped sizes of the bundles (gzip level 9). */
+function sizes() {
+  if (ONLY && !ONLY.includes('sizes')) return;
+  for (const f of ['functions.js', 'taskpane.js']) {
+    const p = resolve(DIST, f);
+    if (!existsSync(p)) {
+      console.log(`${'size'.padEnd(18)} ${f}: missing`);
+      continue;
+    }
+    const raw = readFileSync(p);
+    const gz = zlib.gzipSync(raw, { level: 9 }).length;
+    results.push({ name: `size ${f}`, bytes: raw.length, gzipBytes: gz });
+    const target = f === 'functions.js' ? `  target < 60 KB: ${gz < 60 * 1024 ? 'met' : 'MISSED'}` : '';
+    // decimal.js announces its errors as "[DecimalError]": that text is in any bundle that holds it
+    const decimal = raw.includes('[DecimalError]') ? 'decimal.js bundled' : 'no decimal.js';
+    console.log(`${'size'.padEnd(18)} ${f}: ${(raw.length / 1024).toFixed(1)} KB, gzipped ${(gz / 1024).toFixed(1)} KB, ${decimal}${target}`);
+  }
 }
 
 /* ------------------------------------------------------------------------------------------ */
@@ -528,13 +653,9 @@ function tableLookup() {
     for (let i = 0; i < N; i++) s += t.findCouple(qs[i]).e0;
     return s;
   };
+  releaseTs();
   const r = race(look(big.table, qBig), look(built, qBuiltin));
-  const nsBig = (r.entryMs * 1e6) / N;
-  const nsBuiltin = (r.bareMs * 1e6) / N;
-  results.push({ name: 'table-lookup', rows: big.table.couples.length, nsBig, nsBuiltin, ratio: r.ratio });
-  console.log(
-    `${'table-lookup'.padEnd(18)} findCouple: ${big.table.couples.length}-row table ${nsBig.toFixed(0)} ns, built-in (${built.couples.length} rows) ${nsBuiltin.toFixed(0)} ns per look-up; ratio ${r.ratio.toFixed(2)} (1.0 = cost does not grow with size)`,
-  );
+  report('table-lookup', 'findCouple in a 10,000-row table against the built-in one', { ...r, lookups: N, rows: big.table.couples.length, builtinRows: built.couples.length });
 }
 
 /* ------------------------------------------------------------------------------------------ */
