@@ -32,7 +32,7 @@ import { builtinTable } from '../../src/table/builtin';
 import { RUNS, SEED, messageProblem } from './support';
 
 const KINDS = new Set(['empty', 'too-large', 'not-json', 'not-ours', 'newer-schema', 'damaged', 'checksum', 'rows']);
-const CASES = Math.max(200, RUNS);
+const CASES = Math.max(1000, Math.floor(RUNS / 5));
 
 function deepFreeze<T>(x: T): T {
   if (typeof x === 'object' && x !== null && !Object.isFrozen(x)) {
