@@ -21,25 +21,34 @@
  * Nothing here throws: every failure becomes a CustomFunctions.Error value.
  *
  * Rules made precise by the robustness work (issue 6):
+ *  - A cell's error is the first error among its arguments in argument order, exactly as if the
+ *    function were called with that cell's values alone (a range call and the per-cell calls
+ *    always agree; tests/robustness/broadcast.test.ts holds every function to it). Arguments read
+ *    whole (lists) that cannot be read give one error for the whole call.
  *  - An input error value is passed through only when Excel accepts it as a function's result
  *    (#N/A, #VALUE!, #NUM!, #DIV/0!, #NULL!). #REF! and #NAME? may arrive from a cell but may not
  *    be returned, so they become #VALUE! with a message naming the argument. An object that only
  *    looks like an error (a `code` that is not an Excel error code) is not one: it is read as a
  *    value that is neither a number nor text (#VALUE!). Look-alikes with a real code are rebuilt
  *    as CustomFunctions.Error.
- *  - Every message is one line of plain words, at most 300 characters: quoted user text longer
- *    than 40 characters is shortened with "…". Style: what was wrong and what is accepted,
- *    "Q must be a number; got \"abc\"", "unknown couple \"Xx/Yy\"; use a key … such as \"Cu2+/Cu\"".
- *    #NUM! never carries a message (Excel shows none).
+ *  - Message style: one line of plain words saying what was wrong and what is accepted,
+ *    `Q must be a number; got "abc"`, `unknown couple "Xx/Yy"; use a key of the potential table
+ *    such as "Cu2+/Cu"`, `n is required; the cell is empty`. Echoed text is quoted Excel-style
+ *    (inner quotes doubled) and cut to 40 characters; a message longer than 300 characters keeps
+ *    its beginning and end and loses the middle. #N/A and #VALUE! always carry a message; #NUM!
+ *    never does (Excel shows none) and is one shared value.
  *  - A result text longer than Excel's 32,767 characters per cell is #VALUE! with a message.
  *
  * Performance (issue 5; figures in BENCHMARKS.md): scalar arguments are converted once per call;
- * the element loop reads numbers without allocating (a number in its domain is used as it is,
- * only other values go through the converters), calls `compute` with the arguments spread by
- * arity, and stores numeric results and error values by separate statements so that a range of
- * numbers stays an unboxed array of doubles. Look-ups of couple and electrode keys are memoized
- * per table (a changed table is a new object, see context.ts), so a range of keys costs one Map
- * look-up per cell after the first occurrence of each key.
+ * the element loop reads numbers without allocating (a number in its domain, checked against the
+ * domain's bounds inline, is used as it is; only other values go through the converters), calls
+ * `compute` through one closure with the fixed arguments bound, and stores numeric results and
+ * error values by separate statements so that a range of numbers stays an unboxed array of
+ * doubles. Each distinct text of a range (keys, formulas, model names) is converted once per call,
+ * and couple/electrode look-ups are memoized per table (a changed table is a new object, see
+ * context.ts). Built-ins (Math, Number, Array, …) are bound once per bundle (functions/intrinsics.ts
+ * and the build's ProvidePlugin), because node:vm, where the tests and the benchmark run the
+ * bundle, makes every global look-up cost about 150 ns. None of this changes a result.
  */
 import { DomainError, InputError, NotFoundError } from '../src/errors';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
