@@ -3,8 +3,9 @@
 // object, collecting the functions it associates. Calls go by id with every declared parameter
 // passed (null for omitted ones) and an invocation object appended last.
 //
-// Used by the demo (scripts/demo.mjs) and the reference generator (scripts/docs.mjs). It mirrors
-// tests/bundle/harness.ts, written in plain JavaScript so that those scripts run on bare node.
+// The one loader: used by the demo (scripts/demo.mjs), the reference generator (scripts/docs.mjs)
+// and, through tests/bundle/harness.ts (types in bundle.d.mts), by the test suite. Plain
+// JavaScript so that those scripts run on bare node.
 import { existsSync, readFileSync, statSync, readdirSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { dirname, resolve, join } from 'node:path';
@@ -77,10 +78,10 @@ export function ensureBuilt({ quiet = false } = {}) {
 }
 
 /**
- * Evaluates dist/functions.js with nothing but a CustomFunctions global and returns
- * { metadata, registered, call(id, ...args), byId }.
+ * Evaluates dist/functions.js with nothing but a CustomFunctions global (plus any extraGlobals a
+ * test asks for) and returns { metadata, registered, byId, sandbox, call(id, ...args) }.
  */
-export function loadBundle(distDir = DIST) {
+export function loadBundle(extraGlobals = {}, distDir = DIST) {
   const code = readFileSync(resolve(distDir, 'functions.js'), 'utf8');
   const metadata = JSON.parse(readFileSync(resolve(distDir, 'functions.json'), 'utf8'));
   const registered = new Map();
@@ -92,7 +93,7 @@ export function loadBundle(distDir = DIST) {
       else for (const [k, v] of Object.entries(idOrMap)) registered.set(k.toUpperCase(), v);
     },
   };
-  const sandbox = { CustomFunctions };
+  const sandbox = { CustomFunctions, ...extraGlobals };
   vm.createContext(sandbox);
   vm.runInContext(code, sandbox, { filename: 'functions.js' });
   const byId = new Map(metadata.functions.map((f) => [f.id, f]));
@@ -100,6 +101,7 @@ export function loadBundle(distDir = DIST) {
     metadata,
     registered,
     byId,
+    sandbox,
     /** Calls a function like Excel: omitted parameters null, an invocation object appended. */
     call(id, ...args) {
       const meta = byId.get(id);
