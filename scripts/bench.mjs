@@ -643,7 +643,7 @@ function tableLookup() {
 
 /** In a child process: what a fresh runtime pays before the first cell answers. */
 function coldChild(what) {
-  const t0 = now();
+
   if (what === 'bundle') {
     const t1 = now();
     const fns = loadBundle(); // reads functions.js and functions.json, evaluates, registers
