@@ -420,8 +420,8 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
   return hit;
 }
 
-/** Reads a whole range as a flat list (row by row). Blank cells are skipped. */
-function readList(raw: unknown, spec: ArgSpec): number[] | string[] | CustomFunctions.Error {
+/** Flattens a whole range row by row, blanks kept in place (so that paired lists stay paired). */
+function flattenList(raw: unknown, spec: ArgSpec): unknown[] | CustomFunctions.Error {
   const flat: unknown[] = [];
   if (isArray(raw)) {
     for (const row of raw) {
@@ -434,7 +434,11 @@ function readList(raw: unknown, spec: ArgSpec): number[] | string[] | CustomFunc
       if (flat.length > 100000) return invalidValue(`${spec.name} has more than 100000 values; at most 100000`);
     }
   } else flat.push(raw);
-  const cells = flat.filter((v) => !isBlank(v));
+  return flat;
+}
+
+/** Converts the non-blank cells of one list. */
+function convertList(cells: readonly unknown[], spec: ArgSpec): number[] | string[] | CustomFunctions.Error {
   if (cells.length === 0) {
     if (spec.optional || spec.default !== undefined) return [];
     return invalidValue(`${spec.name} is required; the range is empty`);
@@ -453,6 +457,45 @@ function readList(raw: unknown, spec: ArgSpec): number[] | string[] | CustomFunc
     const t = textFrom(v, spec);
     if (typeof t !== 'string') return t;
     out.push(t);
+  }
+  return out;
+}
+
+/**
+ * Reads the whole-range arguments of a call (COMBINE's potentials and electrons, IONICSTRENGTH's
+ * molalities and charges, HALFCELLBYSPECIES' species and activities). Blank cells are skipped, but
+ * lists of the same length are read as pairs by position: a position blank in every list is
+ * skipped, a position blank in only some of them is a #VALUE! naming it (skipping it in one list
+ * alone would pair the others' values with the wrong partners).
+ */
+function readLists(raws: readonly unknown[], specs: readonly ArgSpec[]): Array<number[] | string[]> | CustomFunctions.Error {
+  const flats: unknown[][] = [];
+  for (let k = 0; k < specs.length; k++) {
+    const f = flattenList(raws[k], specs[k]);
+    if (isErrorValue(f)) return f;
+    flats.push(f);
+  }
+  const paired = flats.length > 1 && flats.every((f) => f.length === flats[0].length);
+  const kept: unknown[][] = flats.map(() => []);
+  if (paired) {
+    for (let j = 0; j < flats[0].length; j++) {
+      const blank = flats.map((f) => isBlank(f[j]));
+      if (blank.every(Boolean)) continue;
+      if (blank.some(Boolean)) {
+        const empty = specs.filter((_, k) => blank[k]).map((a) => a.name).join(' and ');
+        const full = specs.filter((_, k) => !blank[k]).map((a) => a.name).join(' and ');
+        return invalidValue(`value ${j + 1} of ${full} has no partner: that cell of ${empty} is empty`);
+      }
+      for (let k = 0; k < flats.length; k++) kept[k].push(flats[k][j]);
+    }
+  } else {
+    for (let k = 0; k < flats.length; k++) for (const v of flats[k]) if (!isBlank(v)) kept[k].push(v);
+  }
+  const out: Array<number[] | string[]> = [];
+  for (let k = 0; k < specs.length; k++) {
+    const list = convertList(kept[k], specs[k]);
+    if (isErrorValue(list)) return list;
+    out.push(list);
   }
   return out;
 }
@@ -581,6 +624,8 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
   const n = spec.args.length;
   const names = spec.args.map((a) => a.name);
   const isList = spec.args.map((a) => a.kind === 'numberList' || a.kind === 'textList');
+  const listIdx: number[] = [];
+  for (let i = 0; i < n; i++) if (isList[i]) listIdx.push(i);
   const converters: Array<Converter | null> = spec.args.map((a, i) => (isList[i] ? null : makeConverter(a)));
   /** For number arguments, the check of the fast path (a number in the domain is used as it is). */
   const checks: Array<NumberCheck | null> = spec.args.map((a) => {
@@ -629,14 +674,17 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     let ranges: Array<Range | null> | null = null;
     let scalarError: CustomFunctions.Error | null = null;
     let scalarErrorAt = n;
+    if (listIdx.length > 0) {
+      const lists = readLists(
+        listIdx.map((i) => raws[i]),
+        listIdx.map((i) => spec.args[i]),
+      );
+      if (isErrorValue(lists)) return [[lists]];
+      for (let k = 0; k < listIdx.length; k++) vals[listIdx[k]] = lists[k];
+    }
     for (let i = 0; i < n; i++) {
       let raw = raws[i];
-      if (isList[i]) {
-        const list = readList(raw, spec.args[i]);
-        if (isErrorValue(list)) return [[list]];
-        vals[i] = list;
-        continue;
-      }
+      if (isList[i]) continue;
       if (isArray(raw)) {
         const row0 = raw[0];
         if (raw.length === 1 && isArray(row0) && row0.length === 1) raw = row0[0];

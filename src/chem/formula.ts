@@ -141,7 +141,21 @@ export function parseFormula(body: string): Record<string, number> {
   const s = body.replace(/\s+/g, '');
   if (s === '') throw new InputError('a formula is empty');
   const total: Record<string, number> = {};
-  const parts = s.split(/[·*.•]/);
+  // Hydrate dots: ·, * and • always; "." too, except inside a decimal multiplier ("CaSO4·0.5H2O",
+  // "CaSO4.0.5H2O"), where a run of digits before the "." and a digit after it make one number.
+  const parts: string[] = [];
+  for (const piece of s.split(/[·*•]/)) {
+    const dotted = piece.split('.');
+    let cur = dotted[0];
+    for (let k = 1; k < dotted.length; k++) {
+      if (/^\d+$/.test(cur) && /^\d/.test(dotted[k])) cur = `${cur}.${dotted[k]}`;
+      else {
+        parts.push(cur);
+        cur = dotted[k];
+      }
+    }
+    parts.push(cur);
+  }
   for (const part of parts) {
     if (part === '') throw new InputError(`cannot read the formula "${body}": a hydrate dot needs a formula on each side`);
     const m = /^(\d+(?:\.\d+)?)?(.*)$/.exec(part)!;

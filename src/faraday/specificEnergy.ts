@@ -9,7 +9,8 @@ const G_PER_KG = 1000;
 
 /**
  * Specific electrical energy of an electrolysis, in kWh per kg of product: w = U·nF/(ε·M), with
- * U the cell voltage (its magnitude) and ε the current efficiency.
+ * U the voltage applied across the cell (> 0, as a rectifier reads it; a negative reversible voltage
+ * from EFROMTHERMO or THERMONEUTRAL is entered as its magnitude) and ε the current efficiency.
  *
  * Syntax: specificEnergy(cellVoltageV, species, n, efficiency)
  * Example: specificEnergy(2.0, "Cu", 2, 0.9) → 1.875 kWh/kg

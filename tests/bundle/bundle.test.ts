@@ -111,3 +111,16 @@ describe('domain and type errors', () => {
     expect(Object.is(one(b.call('DELTAG', -0, 1)), 0)).toBe(true);
   });
 });
+
+describe('paired whole-range arguments', () => {
+  it('a position blank in both lists is skipped', () => {
+    // Fe3+/Fe from CRC E° values, with an empty row between the steps
+    expect(one(b.call('COMBINE', [[0.771], [null], [-0.447]], [[1], [null], [2]]))).toBeCloseTo(-0.041, 3);
+  });
+  it('a position blank in only one list is #VALUE! naming it, never a silent re-pairing', () => {
+    const r = one(b.call('COMBINE', [[0.771], [null], [-0.447]], [[1], [2], [null]])) as { code: string; message: string };
+    expect(r.code).toBe('#VALUE!');
+    expect(r.message).toMatch(/value 2 of electrons has no partner: that cell of potentials is empty/);
+    expect(isError(one(b.call('IONICSTRENGTH', [[0.1], [null], [0.2]], [[1], [-1], [null]])), '#VALUE!')).toBe(true);
+  });
+});

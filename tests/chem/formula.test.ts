@@ -63,6 +63,9 @@ describe('parseFormula', () => {
     expect(parseFormula('K4[Fe(CN)6]·3H2O')).toEqual({ K: 4, Fe: 1, C: 6, N: 6, H: 6, O: 3 });
     expect(parseFormula('[Co(NH3)6]Cl3')).toEqual({ Co: 1, N: 6, H: 18, Cl: 3 });
     expect(parseFormula('Ca3(PO4)2')).toEqual({ Ca: 3, P: 2, O: 8 });
+    // a decimal hydrate multiplier: plaster of Paris, CaSO4·½H2O
+    expect(parseFormula('CaSO4·0.5H2O')).toEqual({ Ca: 1, S: 1, O: 4.5, H: 1 });
+    expect(parseFormula('CaSO4.0.5H2O')).toEqual({ Ca: 1, S: 1, O: 4.5, H: 1 });
   });
   it('rejects text that is not a formula, in plain words', () => {
     expect(() => parseFormula('Xx2')).toThrow(/not an element symbol/);

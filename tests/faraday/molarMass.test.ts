@@ -22,6 +22,7 @@ describe('molarMass: hydrates and complex salts', () => {
     ['Ni(NH2SO3)2·4H2O', 322.93, 'nickel sulfamate tetrahydrate, plating handbooks (from memory)'],
     ['CrO3', 99.99, 'CRC, chromium(VI) oxide'],
     ['Fe2(SO4)3', 399.88, 'CRC, iron(III) sulfate'],
+    ['CaSO4·0.5H2O', 145.15, 'CRC, calcium sulfate hemihydrate (a decimal hydrate multiplier)'],
   ];
   for (const [formula, expected, source] of cases) {
     it(`${formula} ≈ ${expected} g/mol (${source})`, () => {
