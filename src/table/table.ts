@@ -45,9 +45,37 @@ function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
 }
 
+/** Longest text echoed in a message, in characters (longer text is cut and ends in "…"). */
+const ECHO_MAX_CHARS = 40;
+/** Longest message passed on from the half-reaction or species reader (it may quote the text read). */
+const READER_MESSAGE_MAX_CHARS = 160;
+
+/** Cuts text to `max` characters (not inside a surrogate pair), marking the cut with "…". */
+function cut(text: string, max: number): string {
+  if (text.length <= max) return text;
+  let end = max;
+  const last = text.charCodeAt(end - 1);
+  if (last >= 0xd800 && last <= 0xdbff) end--;
+  return `${text.slice(0, end)}…`;
+}
+
+/**
+ * A value as a message shows it, always short: a number as a number, text quoted and cut to 40
+ * characters, a list or an object by what it is, never written out.
+ */
+function echo(x: unknown): string {
+  if (x === undefined || x === null) return 'nothing';
+  if (typeof x === 'number') return String(x);
+  if (typeof x === 'string') return JSON.stringify(cut(x, ECHO_MAX_CHARS));
+  if (typeof x === 'boolean') return String(x);
+  if (Array.isArray(x)) return 'a list';
+  if (typeof x === 'object') return 'an object';
+  return `a value of type ${typeof x}`;
+}
+
 function checkNumber(x: unknown, what: string, range: { min: number; max: number }, unit: string, problems: string[]): number | undefined {
   if (typeof x !== 'number' || !Number.isFinite(x)) {
-    problems.push(`${what} must be a number; got ${x === undefined ? 'nothing' : JSON.stringify(x)}`);
+    problems.push(`${what} must be a number; got ${echo(x)}`);
     return undefined;
   }
   if (x < range.min || x > range.max) {
@@ -101,22 +129,22 @@ export function validateCoupleRecord(record: unknown): Validated<CoupleRow> {
     try {
       parsed = parseHalfReaction(text);
     } catch (e) {
-      problems.push(e instanceof EchemError ? e.message : `the half-reaction cannot be read: ${String(e)}`);
+      problems.push(cut(e instanceof EchemError ? e.message : `the half-reaction cannot be read: ${String(e)}`, READER_MESSAGE_MAX_CHARS));
     }
   }
   if (key !== undefined) {
     const sides = splitCoupleKey(key);
     if (sides === undefined) {
-      problems.push(`the key "${key}" must be written Ox/Red, e.g. "Cu2+/Cu"`);
+      problems.push(`the key ${echo(key)} must be written Ox/Red, e.g. "Cu2+/Cu"`);
     } else {
       const ox = keySpecies(sides.ox, 'Ox', key, problems);
       const red = keySpecies(sides.red, 'Red', key, problems);
       if (parsed !== undefined) {
         if (ox !== undefined && !parsed.species.some((t) => t.side === 'ox' && t.species.key === ox)) {
-          problems.push(`the key's Ox "${sides.ox}" is not on the left of the half-reaction`);
+          problems.push(`the key's Ox ${echo(sides.ox)} is not on the left of the half-reaction`);
         }
         if (red !== undefined && !parsed.species.some((t) => t.side === 'red' && t.species.key === red)) {
-          problems.push(`the key's Red "${sides.red}" is not on the right of the half-reaction`);
+          problems.push(`the key's Red ${echo(sides.red)} is not on the right of the half-reaction`);
         }
       }
     }
@@ -141,12 +169,12 @@ function keySpecies(text: string, which: string, key: string, problems: string[]
   try {
     const s = parseSpecies(text);
     if (s.isElectron) {
-      problems.push(`the key "${key}" names the electron as ${which}`);
+      problems.push(`the key ${echo(key)} names the electron as ${which}`);
       return undefined;
     }
     return s.key;
   } catch (e) {
-    problems.push(`the key's ${which} "${text}" is not a species: ${e instanceof Error ? e.message : String(e)}`);
+    problems.push(cut(`the key's ${which} ${echo(text)} is not a species: ${e instanceof Error ? e.message : String(e)}`, READER_MESSAGE_MAX_CHARS));
     return undefined;
   }
 }
@@ -216,7 +244,7 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
     const k = normalizeCoupleKey(v.row.key);
     const earlier = coupleRowAt.get(k);
     if (earlier !== undefined) {
-      problems.push({ kind: 'couple', index, key: v.row.key, message: `the key "${v.row.key}" repeats the key of row ${earlier + 1}` });
+      problems.push({ kind: 'couple', index, key: v.row.key, message: `the key ${echo(v.row.key)} repeats the key of row ${earlier + 1}` });
       return;
     }
     coupleRowAt.set(k, index);
@@ -240,7 +268,7 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
         kind: 'electrode',
         index,
         key: v.row.key,
-        message: `the name "${clash}" is already used by row ${electrodeRowAt.get(clash)! + 1}`,
+        message: `the name ${echo(clash)} is already used by row ${electrodeRowAt.get(clash)! + 1}`,
       });
       return;
     }

@@ -135,3 +135,38 @@ describe('buildTable', () => {
     expect(ratio).toBeLessThan(3);
   });
 });
+
+describe('row messages echo values short', () => {
+  // A nested value of about 1 MB written out as JSON.
+  const nested = (depth: number): unknown => (depth === 0 ? { '': '-lzC'.repeat(1000) } : { a: nested(depth - 1), b: nested(depth - 1) });
+  const huge = nested(8);
+
+  it('a record with a huge nested object value gives a message under 200 characters', () => {
+    const built = buildTable('t', [{ ...zinc, e0: huge }, { ...copper, dEdT_mV_K: [huge, huge] }], [{ key: 'SCE', aliases: [], potential: huge, source: 'x' }]);
+    expect(built.problems).toHaveLength(3);
+    for (const p of built.problems) {
+      expect(p.message.length).toBeLessThan(200);
+      expect(p.message).not.toContain('lzC');
+    }
+    expect(built.problems[0].message).toBe('E° must be a number; got an object');
+    expect(built.problems[1].message).toBe('dE°/dT must be a number; got a list');
+    expect(built.problems[2].message).toBe('the potential must be a number; got an object');
+  });
+
+  it('numbers as numbers, nothing as nothing, text quoted and cut to 40 characters', () => {
+    expect(validateCoupleRecord({ ...zinc, e0: Number.POSITIVE_INFINITY }).problems).toEqual(['E° must be a number; got Infinity']);
+    expect(validateCoupleRecord({ ...zinc, e0: null }).problems).toEqual(['E° must be a number; got nothing']);
+    const long = 'volts'.repeat(10000);
+    const [m] = validateCoupleRecord({ ...zinc, e0: long }).problems;
+    expect(m).toBe(`E° must be a number; got "${long.slice(0, 40)}…"`);
+  });
+
+  it('a huge key or half-reaction text is cut as well', () => {
+    const key = `${'Zn'.repeat(50000)}/Zn`;
+    for (const rec of [{ ...zinc, key }, { ...zinc, key: `Zn2+/${'Q'.repeat(100000)}` }, { ...zinc, halfReaction: 'Zn2+ + 2e- '.repeat(90) }]) {
+      const built = buildTable('t', [rec], []);
+      expect(built.problems).toHaveLength(1);
+      expect(built.problems[0].message.length).toBeLessThan(400);
+    }
+  });
+});
