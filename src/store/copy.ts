@@ -90,7 +90,8 @@ export function pinnedCopy(builtin: VersionedRecords): WorkbookCopy {
 export function tableOfCopy(copy: WorkbookCopy): PotentialTable {
   const built = buildTable(copy.basedOn, copy.couples, copy.electrodes);
   if (built.problems.length > 0) {
-    const details = built.problems.map((p) => `${p.kind} ${p.index + 1}${p.key ? ` (${p.key})` : ''}: ${p.message}`);
+    const shortKey = (k: string): string => (k.length > 40 ? `${k.slice(0, 39)}…` : k);
+    const details = built.problems.map((p) => `${p.kind} ${p.index + 1}${p.key ? ` (${shortKey(p.key)})` : ''}: ${p.message}`);
     throw new ChangeError(
       built.problems.length === 1 ? `a row is not usable: ${details[0]}` : `${built.problems.length} rows are not usable`,
       details,
