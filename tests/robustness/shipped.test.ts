@@ -78,3 +78,18 @@ describe('no eval or new Function in the shipped bundles', () => {
     expect(problems).toEqual([]);
   });
 });
+
+describe('user text reaches the page only as text', () => {
+  it('no shipped script parses markup: no innerHTML, outerHTML, insertAdjacentHTML or document.write', () => {
+    // the task pane builds every element with createElement/textContent (taskpane/dom.ts); this keeps it so
+    const problems: string[] = [];
+    for (const file of filesUnder(DIST)) {
+      if (!/\.(m?js|cjs)$/.test(file)) continue;
+      const text = readFileSync(file, 'utf8');
+      for (const m of text.matchAll(/\.(innerHTML|outerHTML)\s*=(?!=)|insertAdjacentHTML\s*\(|document\.write(ln)?\s*\(|createContextualFragment\s*\(/g)) {
+        problems.push(`${relative(DIST, file)}: ${m[0]}`);
+      }
+    }
+    expect(problems).toEqual([]);
+  });
+});
