@@ -31,6 +31,11 @@ export interface Species {
   readonly elements: Readonly<Record<string, number>>;
   /** True for the electron "e-". */
   readonly isElectron: boolean;
+  /**
+   * True when the charge came from a digit before a single sign next to a lone element ("I3-" read
+   * as I with 3−): if the digit was meant as a count, the text should have been written "I3^-".
+   */
+  readonly chargeFromDigit?: boolean;
   /** Canonical text (see canonicalSpecies): "Cu2+", "MnO4-", "Cr2O7^2-"; equal for every spelling of one species. */
   readonly key: string;
 }
@@ -80,7 +85,7 @@ function parseChargeText(t: string): number | undefined {
 }
 
 /** Splits a species text into body, charge and phase. Throws InputError on text it cannot read. */
-export function splitSpecies(text: string): { body: string; charge: number; phase?: Phase } {
+export function splitSpecies(text: string): { body: string; charge: number; phase?: Phase; chargeFromDigit?: boolean } {
   let s = text.replace(/\s+/g, '');
   if (s === '') throw new InputError('a species is empty');
   let phase: Phase | undefined;
@@ -91,6 +96,7 @@ export function splitSpecies(text: string): { body: string; charge: number; phas
     s = s.slice(0, pm.index);
   }
   let charge = 0;
+  let chargeFromDigit = false;
   const caret = s.indexOf('^');
   if (caret >= 0) {
     const c = parseChargeText(s.slice(caret + 1));
@@ -120,6 +126,7 @@ export function splitSpecies(text: string): { body: string; charge: number; phas
         if (d && rest !== '' && (isElementSymbol(rest) || /\d$/.test(rest))) {
           // "Cu2+", "S2-" (a lone element) or "SO42-", "Hg22+" (two digits): the last digit is the charge
           charge = unit * Number(d[1]);
+          chargeFromDigit = isElementSymbol(rest);
           s = rest;
         } else {
           // "MnO4-", "NH4+", "NO3-": the digit is a count and the charge is 1
@@ -130,7 +137,7 @@ export function splitSpecies(text: string): { body: string; charge: number; phas
     }
   }
   if (s === '') throw new InputError(`"${text}" has no formula`);
-  return { body: s, charge, phase };
+  return chargeFromDigit ? { body: s, charge, phase, chargeFromDigit } : { body: s, charge, phase };
 }
 
 /**
@@ -214,11 +221,12 @@ function parseGroup(s: string, whole: string): Record<string, number> {
 
 /** Parses one species (no stoichiometric coefficient). Throws InputError on text it cannot read. */
 export function parseSpecies(text: string): Species {
-  const { body, charge, phase } = splitSpecies(text);
+  const { body, charge, phase, chargeFromDigit } = splitSpecies(text);
   if (body === 'e' || body === 'e−') {
     if (charge !== -1) throw new InputError(`the electron is written "e-"; got "${text}"`);
     return { body: 'e', charge: -1, phase, elements: {}, isElectron: true, key: 'e-' };
   }
   const elements = parseFormula(body);
-  return { body, charge, phase, elements, isElectron: false, key: canonicalSpecies(body, charge) };
+  const key = canonicalSpecies(body, charge);
+  return chargeFromDigit ? { body, charge, phase, elements, isElectron: false, key, chargeFromDigit } : { body, charge, phase, elements, isElectron: false, key };
 }

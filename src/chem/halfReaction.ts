@@ -258,6 +258,25 @@ function merge(terms: RawTerm[]): RawTerm[] {
 }
 
 /**
+ * When the atoms of an element do not balance and a species of that lone element had its charge
+ * read from a digit ("I3-" as I with 3−), says how to write the other reading ("I3^-"), since that
+ * is the likely cause. Common ions such as "Cu2+" in a reaction that balances get no hint.
+ */
+function digitChargeHint(off: ReadonlySet<string>, ...sides: ReadonlyArray<ReadonlyArray<{ species: Species }>>): string {
+  for (const side of sides) {
+    for (const t of side) {
+      const sp = t.species;
+      if (sp.chargeFromDigit && off.has(sp.body)) {
+        const mag = Math.abs(sp.charge);
+        const sign = sp.charge > 0 ? '+' : '-';
+        return `; "${sp.body}${mag}${sign}" was read as ${sp.body} with charge ${mag}${sign}: if ${mag} is a count, write "${sp.body}${mag}^${sign}"`;
+      }
+    }
+  }
+  return '';
+}
+
+/**
  * Reads and checks a half-reaction written as a reduction.
  *
  * Syntax: parseHalfReaction(text)
@@ -296,12 +315,18 @@ export function parseHalfReaction(text: string): HalfReaction {
   const rc = elementCounts(rightSpecies);
   const elements = [...new Set([...lc.keys(), ...rc.keys()])];
   const unbalanced: string[] = [];
+  const off = new Set<string>();
   for (const el of elements) {
     const a = lc.get(el) ?? rat(0);
     const b = rc.get(el) ?? rat(0);
-    if (a.num !== b.num || a.den !== b.den) unbalanced.push(`${el}: ${showRational(a)} on the left, ${showRational(b)} on the right`);
+    if (a.num !== b.num || a.den !== b.den) {
+      unbalanced.push(`${el}: ${showRational(a)} on the left, ${showRational(b)} on the right`);
+      off.add(el);
+    }
   }
-  if (unbalanced.length > 0) throw new InputError(`the half-reaction does not balance (${unbalanced.join('; ')})`);
+  if (unbalanced.length > 0) {
+    throw new InputError(`the half-reaction does not balance (${unbalanced.join('; ')})${digitChargeHint(off, left, right)}`);
+  }
   // charge balance, electrons included
   const ql = chargeOf(left);
   const qr = chargeOf(right);

@@ -231,3 +231,19 @@ describe('reaction quotient', () => {
     expect(() => lnReactionQuotient(hr, () => -1)).toThrow(DomainError);
   });
 });
+
+describe('a charge read from a digit', () => {
+  it('a failed balance says how to write the digit as a count ("I3-" → "I3^-")', () => {
+    // triiodide: I3- + 2e- -> 3I- (common practice: the tri-iodide couple of iodometry)
+    expect(() => parseHalfReaction('I3- + 2e- -> 3I-')).toThrow(/"I3-" was read as I with charge 3-: if 3 is a count, write "I3\^-"/);
+    expect(parseHalfReaction('I3^- + 2e- -> 3I-').n).toBe(2);
+  });
+  it('adds nothing when no such species is involved', () => {
+    expect(() => parseHalfReaction('Cu2+ + e- -> Cu')).toThrow(/charge does not balance: \+2 on the left|charge does not balance/);
+    try {
+      parseHalfReaction('Cu2+ + e- -> Cu');
+    } catch (e) {
+      expect((e as Error).message).not.toMatch(/was read as/);
+    }
+  });
+});
