@@ -23,6 +23,11 @@ export function potential(name = 'potential_V'): ArgSpec {
   return { name, kind: 'number', domain: domains.any, unit: 'V' };
 }
 
+/** A couple key of the potential table ("Cu2+/Cu"). */
+export function couple(name = 'couple'): ArgSpec {
+  return { name, kind: 'couple', unit: '' };
+}
+
 /** A required number with a domain. */
 export function num(name: string, domain = domains.any, unit = ''): ArgSpec {
   return { name, kind: 'number', domain, unit };

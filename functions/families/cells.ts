@@ -7,9 +7,8 @@ import { emf } from '../../src/cells/emf';
 import { galvanic } from '../../src/cells/galvanic';
 import type { CoupleRow } from '../../src/table/types';
 import { type ArgSpec, domains, worksheet } from '../adapter';
-import { temperatureC } from '../args';
+import { couple, temperatureC } from '../args';
 
-const couple = (name: string): ArgSpec => ({ name, kind: 'couple', unit: '' });
 const coupleOrPotential = (name: string): ArgSpec => ({ name, kind: 'coupleOrPotential', domain: domains.any, unit: 'V' });
 
 /** A couple's E° at T, or a number taken as given (V). */

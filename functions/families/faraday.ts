@@ -9,16 +9,15 @@ import { plateThickness } from '../../src/faraday/plateThickness';
 import { plateTime } from '../../src/faraday/plateTime';
 import { specificEnergy } from '../../src/faraday/specificEnergy';
 import { STANDARD_PRESSURE_BAR } from '../../src/constants';
-import { type ArgSpec, type Domain, domains, worksheet } from '../adapter';
-import { electrons, temperatureC } from '../args';
+import { type ArgSpec, domains, worksheet } from '../adapter';
+import { electrons, num, optNum, temperatureC } from '../args';
 
-const req = (name: string, domain: Domain, unit: string): ArgSpec => ({ name, kind: 'number', domain, unit });
 
 /** A formula text ("Ni", "CuSO4·5H2O") or a molar mass in g/mol. */
 const species: ArgSpec = { name: 'species', kind: 'species', domain: domains.positive, unit: 'g/mol' };
 
 /** Current efficiency, a fraction in (0, 1], default 1. */
-const efficiency: ArgSpec = { name: 'efficiency', kind: 'number', optional: true, default: 1, domain: domains.efficiency, unit: '' };
+const efficiency: ArgSpec = optNum('efficiency', 1, domains.efficiency);
 
 export const MOLARMASS = worksheet({ id: 'MOLARMASS', args: [{ name: 'formula', kind: 'text' }], compute: molarMass });
 
@@ -26,24 +25,24 @@ export const ECEQUIV = worksheet({ id: 'ECEQUIV', args: [species, electrons], co
 
 export const DEPOSITMASS = worksheet({
   id: 'DEPOSITMASS',
-  args: [req('current_A', domains.nonNegative, 'A'), req('time_h', domains.nonNegative, 'h'), species, electrons, efficiency],
+  args: [num('current_A', domains.nonNegative, 'A'), num('time_h', domains.nonNegative, 'h'), species, electrons, efficiency],
   compute: depositMass,
 });
 
 export const DEPOSITTIME = worksheet({
   id: 'DEPOSITTIME',
-  args: [req('mass_g', domains.nonNegative, 'g'), req('current_A', domains.positive, 'A'), species, electrons, efficiency],
+  args: [num('mass_g', domains.nonNegative, 'g'), num('current_A', domains.positive, 'A'), species, electrons, efficiency],
   compute: depositTime,
 });
 
 export const PLATETHICKNESS = worksheet({
   id: 'PLATETHICKNESS',
   args: [
-    req('current_density_A_dm2', domains.nonNegative, 'A/dm²'),
-    req('time_min', domains.nonNegative, 'min'),
+    num('current_density_A_dm2', domains.nonNegative, 'A/dm²'),
+    num('time_min', domains.nonNegative, 'min'),
     species,
     electrons,
-    req('density_g_cm3', domains.positive, 'g/cm³'),
+    num('density_g_cm3', domains.positive, 'g/cm³'),
     efficiency,
   ],
   compute: plateThickness,
@@ -52,11 +51,11 @@ export const PLATETHICKNESS = worksheet({
 export const PLATETIME = worksheet({
   id: 'PLATETIME',
   args: [
-    req('thickness_um', domains.nonNegative, 'µm'),
-    req('current_density_A_dm2', domains.positive, 'A/dm²'),
+    num('thickness_um', domains.nonNegative, 'µm'),
+    num('current_density_A_dm2', domains.positive, 'A/dm²'),
     species,
     electrons,
-    req('density_g_cm3', domains.positive, 'g/cm³'),
+    num('density_g_cm3', domains.positive, 'g/cm³'),
     efficiency,
   ],
   compute: plateTime,
@@ -64,21 +63,21 @@ export const PLATETIME = worksheet({
 
 export const CURRENTEFFICIENCY = worksheet({
   id: 'CURRENTEFFICIENCY',
-  args: [req('mass_g', domains.nonNegative, 'g'), req('current_A', domains.positive, 'A'), req('time_h', domains.positive, 'h'), species, electrons],
+  args: [num('mass_g', domains.nonNegative, 'g'), num('current_A', domains.positive, 'A'), num('time_h', domains.positive, 'h'), species, electrons],
   compute: currentEfficiency,
 });
 
 export const SPECIFICENERGY = worksheet({
   id: 'SPECIFICENERGY',
-  args: [req('cell_voltage_V', domains.positive, 'V'), species, electrons, efficiency],
+  args: [num('cell_voltage_V', domains.positive, 'V'), species, electrons, efficiency],
   compute: specificEnergy,
 });
 
 export const GASVOLUME = worksheet({
   id: 'GASVOLUME',
   args: [
-    req('current_A', domains.nonNegative, 'A'),
-    req('time_h', domains.nonNegative, 'h'),
+    num('current_A', domains.nonNegative, 'A'),
+    num('time_h', domains.nonNegative, 'h'),
     electrons,
     temperatureC,
     { name: 'pressure_bar', kind: 'number', optional: true, default: STANDARD_PRESSURE_BAR, domain: domains.positive, unit: 'bar' },

@@ -3,12 +3,12 @@ import { activityCoef } from '../../src/solutions/activityCoef';
 import { ionicStrength } from '../../src/solutions/ionicStrength';
 import { meanActivityCoef } from '../../src/solutions/meanActivityCoef';
 import { type ArgSpec, type Domain, domains, worksheet } from '../adapter';
-import { temperatureC } from '../args';
+import { optNum, temperatureC } from '../args';
 
 const charge = (name: string, domain: Domain = domains.integer): ArgSpec => ({ name, kind: 'number', domain, unit: '' });
 const strength: ArgSpec = { name: 'ionic_strength', kind: 'number', domain: domains.nonNegative, unit: 'mol/kg' };
 const model: ArgSpec = { name: 'model', kind: 'text', optional: true, default: 'DAVIES' };
-const ionSize: ArgSpec = { name: 'ion_size_A', kind: 'number', optional: true, default: null, domain: domains.positive, unit: 'Å' };
+const ionSize: ArgSpec = optNum('ion_size_A', null, domains.positive, 'Å');
 
 export const IONICSTRENGTH = worksheet({
   id: 'IONICSTRENGTH',
