@@ -376,10 +376,19 @@ function makeConverter(spec: ArgSpec): Converter {
 /* Look-ups, memoized per table: a range of keys repeats the same few keys many times. */
 const MEMO_LIMIT = 4096;
 let memoTable: PotentialTable | null = null;
-let coupleMemo = new Map<string, CoupleRow | CustomFunctions.Error>();
-let electrodeMemo = new Map<string, ElectrodeRow | CustomFunctions.Error>();
+const coupleMemo = new Map<string, CoupleRow | CustomFunctions.Error>();
+const electrodeMemo = new Map<string, ElectrodeRow | CustomFunctions.Error>();
 
-function tableForLookUp(): PotentialTable | CustomFunctions.Error {
+/**
+ * Looks a key up in the table in use through a memo that is emptied whenever the table changes
+ * (a changed table is a new object, see context.ts). An unknown key answers `missing(key)`.
+ */
+function memoLookUp<Row>(
+  memo: Map<string, Row | CustomFunctions.Error>,
+  key: string,
+  find: (table: PotentialTable, key: string) => Row | undefined,
+  missing: (key: string) => CustomFunctions.Error,
+): Row | CustomFunctions.Error {
   let table: PotentialTable;
   try {
     table = currentTable();
@@ -388,36 +397,34 @@ function tableForLookUp(): PotentialTable | CustomFunctions.Error {
   }
   if (table !== memoTable) {
     memoTable = table;
-    coupleMemo = new Map();
-    electrodeMemo = new Map();
+    coupleMemo.clear();
+    electrodeMemo.clear();
   }
-  return table;
+  let hit = memo.get(key);
+  if (hit === undefined) {
+    hit = find(table, key) ?? missing(key);
+    if (memo.size >= MEMO_LIMIT) memo.clear();
+    memo.set(key, hit);
+  }
+  return hit;
 }
 
 function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
-  const table = tableForLookUp();
-  if (isErrorValue(table)) return table;
-  let hit = coupleMemo.get(key);
-  if (hit === undefined) {
-    hit = table.findCouple(key) ?? notAvailable(`unknown couple ${show(key)}; use a key of the potential table such as "Cu2+/Cu"`);
-    if (coupleMemo.size >= MEMO_LIMIT) coupleMemo.clear();
-    coupleMemo.set(key, hit);
-  }
-  return hit;
+  return memoLookUp(
+    coupleMemo,
+    key,
+    (t, k) => t.findCouple(k),
+    (k) => notAvailable(`unknown couple ${show(k)}; use a key of the potential table such as "Cu2+/Cu"`),
+  );
 }
 
 function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
-  const table = tableForLookUp();
-  if (isErrorValue(table)) return table;
-  let hit = electrodeMemo.get(key);
-  if (hit === undefined) {
-    hit =
-      table.findElectrode(key) ??
-      notAvailable(`unknown reference electrode ${show(key)}; use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"`);
-    if (electrodeMemo.size >= MEMO_LIMIT) electrodeMemo.clear();
-    electrodeMemo.set(key, hit);
-  }
-  return hit;
+  return memoLookUp(
+    electrodeMemo,
+    key,
+    (t, k) => t.findElectrode(k),
+    (k) => notAvailable(`unknown reference electrode ${show(k)}; use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"`),
+  );
 }
 
 /** Flattens a whole range row by row, blanks kept in place (so that paired lists stay paired). */
