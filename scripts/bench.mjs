@@ -649,10 +649,10 @@ function coldChild(what) {
     const fns = loadBundle(); // reads functions.js and functions.json, evaluates, registers
     const t2 = now();
     // first table-backed answer: builds the built-in table
-    const first = fns.get('E0') ?? fns.get('ELECTRONS') ?? fns.get('EMF');
+    const first = fns.get('STDPOTENTIAL') ?? fns.get('ELECTRONS') ?? fns.get('EMF');
     const v = first ? first(cell('Cu2+/Cu'), null, INVOCATION) : null;
     const t3 = now();
-    if (first && typeof v?.[0]?.[0] !== 'number') throw new Error(`E0 did not answer: ${JSON.stringify(v)}`);
+    if (first && typeof v?.[0]?.[0] !== 'number') throw new Error(`STDPOTENTIAL did not answer: ${JSON.stringify(v)}`);
     return { evalRegisterMs: t2 - t1, firstTableAnswerMs: t3 - t2, registered: fns.size, tableFn: !!first };
   }
   if (what === 'table') {
@@ -707,7 +707,7 @@ async function coldStore() {
   const t2 = now();
   const status = host.useStoredValue(text);
   const t3 = now();
-  const v = await fns.get('E0')(cell(extra[extra.length - 1].key), null, INVOCATION);
+  const v = await fns.get('STDPOTENTIAL')(cell(extra[extra.length - 1].key), null, INVOCATION);
   const t4 = now();
   if (status.state !== 'workbook' || typeof v?.[0]?.[0] !== 'number') throw new Error(`the stored table was not used: ${JSON.stringify(status)} ${JSON.stringify(v)}`);
   return { rows: status.couples + status.electrodes, chars: text.length, evalRegisterMs: t1 - t0, readMs: t3 - t2, firstAnswerMs: t4 - t3 };

@@ -1,6 +1,6 @@
 // npm run demo: the scenario of demo/scenario.mjs, evaluated through the production functions
 // bundle the way Excel's runtime runs it, printed sheet by sheet, and written to
-// demo/cellwright-demo.xlsx with live ECHEM formulas and their computed values cached.
+// demo/cellwright-demo.xlsx with live CELLWRIGHT formulas and their computed values cached.
 //
 //   node scripts/demo.mjs [--out <file.xlsx>] [--no-build] [--quiet]
 //
@@ -283,7 +283,7 @@ async function main() {
     const ev = await evaluateSheet(laid, bundle);
     formulas += ev.formulas.length;
     spilled += ev.spills.size;
-    for (const f of ev.formulas) for (const m of f.formula.matchAll(/ECHEM\.([A-Z0-9]+)\(/g)) used.add(m[1]);
+    for (const f of ev.formulas) for (const m of f.formula.matchAll(/CELLWRIGHT\.([A-Z0-9]+)\(/g)) used.add(m[1]);
     for (const e of errorsOf(laid, ev)) if (!e.expected) unexpected.push({ sheet: sheet.name, ...e });
     printSheet(laid, ev);
     writeSheet(wb, laid, ev);
@@ -297,7 +297,7 @@ async function main() {
   const absent = [...used].filter((id) => !bundle.byId.has(id));
   out();
   out(bold('Summary'));
-  out(`   ${scenario.sheets.length} sheets, ${formulas} formulas (${spilled} spilled), using ${ids.length - unused.length} of the bundle's ${ids.length} ECHEM functions.`);
+  out(`   ${scenario.sheets.length} sheets, ${formulas} formulas (${spilled} spilled), using ${ids.length - unused.length} of the bundle's ${ids.length} CELLWRIGHT functions.`);
   if (unused.length) out(`   Not used by the scenario: ${unused.join(', ')}.`);
   if (absent.length) out(`   Used by the scenario but not in this bundle: ${absent.join(', ')}.`);
   const build = buildSeconds >= 1 ? ` (plus ${buildSeconds.toFixed(0)} s to build the bundle)` : '';

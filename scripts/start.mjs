@@ -57,5 +57,5 @@ Sideload it into Excel:
 
 The browser or Excel must trust the development CA: ${ca}
 (run "npm start -- --install-ca" to install it in the system store, or import it by hand).
-Then type =ECHEM. in a cell. Stop the server with Ctrl+C.
+Then type =CELLWRIGHT. in a cell. Stop the server with Ctrl+C.
 `);

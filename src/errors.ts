@@ -7,7 +7,7 @@
  * - InputError     → #VALUE! with its message (text that cannot be read as what was expected)
  * - DomainError    → #NUM! (a number outside the function's domain, or a result outside double range)
  */
-export class EchemError extends Error {
+export class CellwrightError extends Error {
   constructor(message: string) {
     super(message);
     this.name = new.target.name;
@@ -15,13 +15,13 @@ export class EchemError extends Error {
 }
 
 /** Something named does not exist (→ #N/A with message). */
-export class NotFoundError extends EchemError {}
+export class NotFoundError extends CellwrightError {}
 
 /** Text or a value that cannot be read as the expected type (→ #VALUE! with message). */
-export class InputError extends EchemError {}
+export class InputError extends CellwrightError {}
 
 /** A number outside the domain, or a result outside double range (→ #NUM!). */
-export class DomainError extends EchemError {}
+export class DomainError extends CellwrightError {}
 
 /** Throws DomainError unless x is a finite number; returns x. */
 export function finite(x: number, what = 'result'): number {

@@ -41,7 +41,7 @@ export function readNumber(text: string, label: string, range: { min: number; ma
   const t = text.trim().replace(/\u2212/g, '-');
   if (t === '') return required ? { error: `${label} is required` } : undefined;
   if (/^[+-]?\d*,\d+$/.test(t)) return { error: `write ${label} with a decimal point (${t.replace(',', '.')})` };
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return { error: `${label} must be a number, e.g. 0.34` };
+  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return { error: `${label} must be a number, e.g. 0.25` };
   const x = Number(t);
   if (!Number.isFinite(x) || x < range.min || x > range.max) return { error: `${label} must lie between ${range.min} and ${range.max} ${unit}` };
   return x;

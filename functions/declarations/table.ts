@@ -12,14 +12,14 @@ import * as F from '../families/table';
 
 /**
  * Standard potential of a couple, in V vs SHE; at another temperature E°(25 °C) + (dE°/dT)·(T − 25). #N/A when the couple has no stored dE°/dT and T ≠ 25 °C; #NUM! outside 0…100 °C.
- * @customfunction E0
- * @helpurl https://localhost:3000/docs/functions.html#e0
+ * @customfunction STDPOTENTIAL
+ * @helpurl https://localhost:3000/docs/functions.html#stdpotential
  * @param couple Key of the potential table, written Ox/Red (e.g. "Cu2+/Cu", "O2/H2O").
  * @param [temperature_C] Temperature in °C, 0 to 100 (default 25).
  * @returns E° in V vs SHE.
  */
-function e0(couple: any[][], temperature_C?: any[][]): any[][] {
-  return F.E0(couple, temperature_C) as any;
+function stdPotential(couple: any[][], temperature_C?: any[][]): any[][] {
+  return F.STDPOTENTIAL(couple, temperature_C) as any;
 }
 
 /**

@@ -5,8 +5,8 @@ import { worksheet } from '../adapter';
 import { couple, temperatureC } from '../args';
 
 
-export const E0 = worksheet({
-  id: 'E0',
+export const STDPOTENTIAL = worksheet({
+  id: 'STDPOTENTIAL',
   args: [couple(), temperatureC],
   compute: (row: CoupleRow, t: number) => e0AtTemperature(row, t),
   usesTable: true,

@@ -22,6 +22,6 @@ export function colName(c: number): string;
 export function address(r: number, c: number): string;
 export function parseAddress(a: string): { r: number; c: number };
 export function parseFormula(text: string): Tree;
-export function echemCalls(tree: Tree, out?: Set<string>): Set<string>;
+export function cellwrightCalls(tree: Tree, out?: Set<string>): Set<string>;
 export function unwrap(v: unknown): unknown;
 export function evaluate(tree: Tree, ctx: EvalContext): Promise<Value>;

@@ -7,7 +7,7 @@
 //   + - * / ^ & = <> < <= > >= with Excel's precedence (unary minus binds tightest),
 //   element-by-element over arrays with Excel's broadcasting (a single row or column is
 //   repeated; cells outside the smaller shape become #N/A),
-//   ECHEM.<ID>(…) calls (empty arguments are omitted ones), and IF, ABS, MIN, MAX.
+//   CELLWRIGHT.<ID>(…) calls (empty arguments are omitted ones), and IF, ABS, MIN, MAX.
 // Values are scalars (number, string, boolean, null for an empty cell, an error value) or 2-D
 // arrays of them. An error value is any object whose `code` is a string starting with "#".
 
@@ -206,12 +206,12 @@ export function parseFormula(text) {
   return tree;
 }
 
-/** Every ECHEM function id a formula calls (for coverage checks). */
-export function echemCalls(tree, out = new Set()) {
+/** Every CELLWRIGHT function id a formula calls (for coverage checks). */
+export function cellwrightCalls(tree, out = new Set()) {
   if (tree === null || typeof tree !== 'object') return out;
-  if (tree.k === 'call' && tree.name.startsWith('ECHEM.')) out.add(tree.name.slice(6));
-  for (const key of ['a', 'b']) if (tree[key]) echemCalls(tree[key], out);
-  if (tree.args) for (const a of tree.args) echemCalls(a, out);
+  if (tree.k === 'call' && tree.name.startsWith('CELLWRIGHT.')) out.add(tree.name.slice('CELLWRIGHT.'.length));
+  for (const key of ['a', 'b']) if (tree[key]) cellwrightCalls(tree[key], out);
+  if (tree.args) for (const a of tree.args) cellwrightCalls(a, out);
   return out;
 }
 
@@ -357,7 +357,7 @@ const BUILTIN = {
 /**
  * Evaluates a parsed formula.
  *  ctx.cell(r, c)             → Promise of the value in that cell (null when empty)
- *  ctx.call(id, args)         → the ECHEM function's raw result (2-D array or a promise of one);
+ *  ctx.call(id, args)         → the CELLWRIGHT function's raw result (2-D array or a promise of one);
  *                               args are already shaped the way Excel passes them
  *  ctx.known(id)              → true when the bundle has the function
  *  ctx.dimensionality(id, i)  → "matrix" or "scalar" for parameter i of the function
@@ -392,7 +392,7 @@ export async function evaluate(tree, ctx) {
       return broadcast([a, b], BINARY[tree.op]);
     }
     case 'call': {
-      if (tree.name.startsWith('ECHEM.')) return callEchem(tree, ctx);
+      if (tree.name.startsWith('CELLWRIGHT.')) return callCellwright(tree, ctx);
       const f = BUILTIN[tree.name];
       if (!f) return new FormulaError('#NAME?', `${tree.name} is not a function this evaluator knows`);
       const args = [];
@@ -404,10 +404,10 @@ export async function evaluate(tree, ctx) {
   }
 }
 
-async function callEchem(tree, ctx) {
-  const id = tree.name.slice(6);
+async function callCellwright(tree, ctx) {
+  const id = tree.name.slice('CELLWRIGHT.'.length);
   if (!ctx.known(id)) {
-    return new FormulaError('#NAME?', `ECHEM.${id} is not in the functions bundle`);
+    return new FormulaError('#NAME?', `CELLWRIGHT.${id} is not in the functions bundle`);
   }
   const args = [];
   for (let i = 0; i < tree.args.length; i++) {

@@ -150,7 +150,7 @@ function parseNumber(text: string, column: string, decimalComma: boolean): numbe
   let t = text.trim().replace(/\u2212/g, '-');
   if (decimalComma) t = t.replace(',', '.');
   if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) {
-    if (!decimalComma && /^[+-]?\d*,\d+$/.test(t)) return `${column} "${text.trim()}" uses a decimal comma; write a point (0.34) in a comma-separated file`;
+    if (!decimalComma && /^[+-]?\d*,\d+$/.test(t)) return `${column} "${text.trim()}" uses a decimal comma; write a point (0.25) in a comma-separated file`;
     return `${column} "${text.trim()}" is not a number`;
   }
   return Number(t);

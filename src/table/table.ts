@@ -8,7 +8,7 @@
  */
 import { parseSpecies } from '../chem/formula';
 import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
-import { EchemError } from '../errors';
+import { CellwrightError } from '../errors';
 import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
 import type { CoupleRecord, ElectrodeRecord } from './records';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from './types';
@@ -129,7 +129,7 @@ export function validateCoupleRecord(record: unknown): Validated<CoupleRow> {
     try {
       parsed = parseHalfReaction(text);
     } catch (e) {
-      problems.push(cut(e instanceof EchemError ? e.message : `the half-reaction cannot be read: ${String(e)}`, READER_MESSAGE_MAX_CHARS));
+      problems.push(cut(e instanceof CellwrightError ? e.message : `the half-reaction cannot be read: ${String(e)}`, READER_MESSAGE_MAX_CHARS));
     }
   }
   if (key !== undefined) {

@@ -41,8 +41,8 @@ async function reopen(page) {
 
 const stored = (page) => page.evaluate((k) => window.__stubWorkbook.file().settings[k] ?? null, KEY);
 const calculations = (page) => page.evaluate(() => window.__stubWorkbook.file().calculations);
-/** What =ECHEM.E0(key) shows now, through the function functions.js registered. */
-const cellE0 = (page, key) => page.evaluate((k) => window.__stubWorkbook.call('E0', [[k]], null), key);
+/** What =CELLWRIGHT.STDPOTENTIAL(key) shows now, through the function functions.js registered. */
+const cellE0 = (page, key) => page.evaluate((k) => window.__stubWorkbook.call('STDPOTENTIAL', [[k]], null), key);
 
 async function text(page, selector) {
   return (await page.locator(selector).innerText()).replace(/\s+/g, ' ').trim();
@@ -231,14 +231,14 @@ export const tests = [
       await page.click('#save-couple');
       await waitIdle(page);
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
-      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3521);
       assert.match(await row(page, 'couple', 'Cu2+/Cu').innerText(), /Edited here: E°, source/);
       // Escape closes the editor without saving.
       await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
       await page.fill('#f-couple-e0', '0.5');
       await page.keyboard.press('Escape');
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
-      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3521);
       assert.equal(JSON.parse(await stored(page)).revision, 1);
     },
   },
@@ -342,14 +342,14 @@ export const tests = [
       assert.equal(pinned.checksum, builtinChecksum); // a pinned copy carries the built-in table's checksum
       await reopen(page);
       assert.match(await text(page, '#in-use'), /This workbook’s own table.*Revision 1.*Differ from built-in none/);
-      // The workbook was pinned to an older built-in table in which Cu2+/Cu was 0.337 V and Ag+/Ag was set here.
+      // The workbook was pinned to an older built-in table in which Cu2+/Cu was 0.3377 V and Ag+/Ag was set here.
       const doc = JSON.parse(await stored(page));
       doc.basedOn = '2025.1';
-      doc.couples = doc.couples.map((c) => (c.key === 'Cu2+/Cu' ? { ...c, e0: 0.337 } : c.key === 'Ag+/Ag' ? { ...c, e0: 0.8, source: 'lab' } : c));
+      doc.couples = doc.couples.map((c) => (c.key === 'Cu2+/Cu' ? { ...c, e0: 0.3377 } : c.key === 'Ag+/Ag' ? { ...c, e0: 0.8, source: 'lab' } : c));
       doc.own.couples = ['Ag+/Ag'];
       await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, reseal(doc)]);
       await reopen(page);
-      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.337); // pinned values, not the add-in's
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3377); // pinned values, not the add-in's
       const newer = await text(page, '#newer-builtin');
       assert.match(newer, new RegExp(`built-in table ${BUILTIN_VERSION} is newer than 2025\\.1`));
       assert.match(newer, /Updating would change 1 row: couple Cu2\+\/Cu: E° 0\.337 → 0\.3419 V/);
@@ -393,7 +393,7 @@ export const tests = [
       await waitIdle(page);
       assert.match(await notice(page), /Imported 2 couples and 1 electrode/);
       assert.equal(await cellE0(page, 'Tl+/Tl'), -0.336);
-      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.34);
+      assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3521);
       assert.equal((await cellE0(page, 'In3+/In')), builtinE0('In3+/In'));
       const doc = JSON.parse(await stored(page));
       assert.equal(doc.couples.find((c) => c.key === 'Cu2+/Cu').note, 're-measured, see "log"');
@@ -409,7 +409,7 @@ export const tests = [
       await confirmDialog(page, false);
       assert.equal(JSON.parse(await stored(page)).couples.length, doc.couples.length);
       // A file that is not in the layout is refused whole.
-      await page.fill('#import-text', 'name,value\nCu,0.34\n');
+      await page.fill('#import-text', 'name,value\nCu,0.3521\n');
       await page.click('#import-check');
       assert.match(await text(page, '#import-report'), /cannot be imported: .*"name", "value" are not columns/);
     },
@@ -626,7 +626,7 @@ export const tests = [
       doc.couples = doc.couples.map((c) => (c.key === 'Ag+/Ag' ? { ...c, e0: 0.81, source: 'co-author' } : c));
       doc.own.couples = [...doc.own.couples, 'Ag+/Ag'];
       await page.evaluate(([k, v]) => window.__stubWorkbook.writeElsewhere(k, v), [KEY, reseal(doc)]);
-      await page.waitForFunction(async () => (await window.__stubWorkbook.call('E0', [['Ag+/Ag']], null)) === 0.81);
+      await page.waitForFunction(async () => (await window.__stubWorkbook.call('STDPOTENTIAL', [['Ag+/Ag']], null)) === 0.81);
       // This pane has not noticed yet; saving now must not overwrite the co-author's row.
       await page.fill('#filter-couple', 'Cu2+/Cu');
       await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();

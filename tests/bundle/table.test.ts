@@ -1,5 +1,5 @@
 /**
- * The production bundle (node:vm, only a CustomFunctions global): E0, ELECTRONS, HALFREACTION and
+ * The production bundle (node:vm, only a CustomFunctions global): STDPOTENTIAL, ELECTRONS, HALFREACTION and
  * SOURCE answer from the built-in table.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -11,40 +11,40 @@ beforeAll(() => {
 });
 const call = async (id: string, ...args: unknown[]) => (await b.call(id, ...args)) as unknown[][];
 
-describe('E0', () => {
+describe('STDPOTENTIAL', () => {
   it('a scalar couple with temperature omitted (null) is the 25 °C value', async () => {
-    expect(one(await call('E0', 'Cu2+/Cu'))).toBe(0.3419); // CRC Handbook, Electrochemical Series (from memory)
-    expect(one(await call('E0', [['Zn2+/Zn']], [[null]]))).toBe(-0.7618); // CRC Handbook (from memory)
-    expect(one(await call('E0', 'Cu2+/Cu', ''))).toBe(0.3419);
+    expect(one(await call('STDPOTENTIAL', 'Cu2+/Cu'))).toBe(0.3419); // CRC Handbook, Electrochemical Series (from memory)
+    expect(one(await call('STDPOTENTIAL', [['Zn2+/Zn']], [[null]]))).toBe(-0.7618); // CRC Handbook (from memory)
+    expect(one(await call('STDPOTENTIAL', 'Cu2+/Cu', ''))).toBe(0.3419);
   });
   it('reads every key spelling down a column', async () => {
-    const r = await call('E0', [['Cu(2+)/Cu'], ['Cu^2+ / Cu'], ['Cu+2/Cu'], ['Fe(3+)/Fe+2']]);
+    const r = await call('STDPOTENTIAL', [['Cu(2+)/Cu'], ['Cu^2+ / Cu'], ['Cu+2/Cu'], ['Fe(3+)/Fe+2']]);
     expect(r.map((x) => x[0])).toEqual([0.3419, 0.3419, 0.3419, 0.771]); // CRC Handbook (from memory)
   });
   it('moves E° with dE°/dT: O2/H2O across a row of temperatures', async () => {
     // 1.229 V (CRC) and −0.846 mV/K (Bratsch 1989), both from memory
-    const r = await call('E0', 'O2/H2O', [[25, 60, 80]]);
+    const r = await call('STDPOTENTIAL', 'O2/H2O', [[25, 60, 80]]);
     expect(r[0][0]).toBe(1.229);
     expect(r[0][1]).toBeCloseTo(1.229 - 0.846e-3 * 35, 10);
     expect(r[0][2]).toBeCloseTo(1.229 - 0.846e-3 * 55, 10);
   });
   it('#N/A with a message when no dE°/dT is stored; #NUM! outside 0…100 °C', async () => {
-    const na = one(await call('E0', 'MnO4-/Mn2+', 40)) as { code: string; message: string };
+    const na = one(await call('STDPOTENTIAL', 'MnO4-/Mn2+', 40)) as { code: string; message: string };
     expect(na.code).toBe('#N/A');
     expect(na.message).toMatch(/no dE°\/dT is stored for "MnO4-\/Mn2\+"/);
-    expect(isError(one(await call('E0', 'Cu2+/Cu', 150)), '#NUM!')).toBe(true);
-    expect(isError(one(await call('E0', 'Cu2+/Cu', -300)), '#NUM!')).toBe(true);
+    expect(isError(one(await call('STDPOTENTIAL', 'Cu2+/Cu', 150)), '#NUM!')).toBe(true);
+    expect(isError(one(await call('STDPOTENTIAL', 'Cu2+/Cu', -300)), '#NUM!')).toBe(true);
   });
   it('an unknown couple is #N/A with a message naming it; a number is #VALUE!', async () => {
-    const r = one(await call('E0', 'Unobtainium2+/U')) as { code: string; message: string };
+    const r = one(await call('STDPOTENTIAL', 'Unobtainium2+/U')) as { code: string; message: string };
     expect(r.code).toBe('#N/A');
     expect(r.message).toMatch(/unknown couple "Unobtainium2\+\/U"/);
-    expect(isError(one(await call('E0', 'CO2+/CO')), '#N/A')).toBe(true); // CO is not Co
-    expect(isError(one(await call('E0', 0.34)), '#VALUE!')).toBe(true);
-    expect(isError(one(await call('E0', null)), '#VALUE!')).toBe(true);
+    expect(isError(one(await call('STDPOTENTIAL', 'CO2+/CO')), '#N/A')).toBe(true); // CO is not Co
+    expect(isError(one(await call('STDPOTENTIAL', 0.3521)), '#VALUE!')).toBe(true);
+    expect(isError(one(await call('STDPOTENTIAL', null)), '#VALUE!')).toBe(true);
   });
   it('a bad element in a range errs in that element only', async () => {
-    const r = await call('E0', [['Ag+/Ag', 'nope', 'H+/H2']]);
+    const r = await call('STDPOTENTIAL', [['Ag+/Ag', 'nope', 'H+/H2']]);
     expect(r[0][0]).toBe(0.7996); // CRC Handbook, 92nd ed. (read)
     expect(isError(r[0][1], '#N/A')).toBe(true);
     expect(r[0][2]).toBe(0); // SHE by definition

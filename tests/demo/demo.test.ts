@@ -10,7 +10,7 @@ import { resolve } from 'node:path';
 import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { scenario } from '../../demo/scenario.mjs';
-import { echemCalls, evaluate, isErrorValue, parseAddress, parseFormula, unwrap } from '../../scripts/lib/formula.mjs';
+import { cellwrightCalls, evaluate, isErrorValue, parseAddress, parseFormula, unwrap } from '../../scripts/lib/formula.mjs';
 import type { Scalar, Value } from '../../scripts/lib/formula.mjs';
 import { layoutSheet } from '../../scripts/lib/workbook.mjs';
 import { loadBundle, type LoadedBundle } from '../bundle/harness';
@@ -93,15 +93,15 @@ describe('npm run demo', () => {
 
   it('prints inputs, formulas and results with units', () => {
     // one quantity line: address, label, value, unit, formula
-    expect(run.stdout).toMatch(/B\d+\s+Plating time to the specified thickness\s+\d+\.\d\s+min\s+=ECHEM\.PLATETIME\(/);
+    expect(run.stdout).toMatch(/B\d+\s+Plating time to the specified thickness\s+\d+\.\d\s+min\s+=CELLWRIGHT\.PLATETIME\(/);
     expect(run.stdout).toMatch(/Contract criterion, polarized \(instant-off\) potential[\s\S]*?-0\.85\s+V vs CSE\s+input/);
     // a spilled table with the formula and the range it filled
-    expect(run.stdout).toMatch(/B\d+:F\d+ =ECHEM\.HALFCELL\(.*\) \(one formula, spilled 8×5\)/);
+    expect(run.stdout).toMatch(/B\d+:F\d+ =CELLWRIGHT\.HALFCELL\(.*\) \(one formula, spilled 8×5\)/);
   });
 
   it('uses every function in the bundle', () => {
     const used = new Set<string>();
-    for (const s of scenario.sheets) for (const cell of layoutSheet(s).cells.values()) if (cell.tree) echemCalls(cell.tree, used);
+    for (const s of scenario.sheets) for (const cell of layoutSheet(s).cells.values()) if (cell.tree) cellwrightCalls(cell.tree, used);
     const ids = bundle.metadata.functions.map((f) => f.id);
     expect(ids.filter((id) => !used.has(id))).toEqual([]);
     expect([...used].filter((id) => !ids.includes(id))).toEqual([]);
@@ -146,7 +146,7 @@ describe('demo/cellwright-demo.xlsx', () => {
     }
     expect(arrays).toBeGreaterThanOrEqual(8);
     // the what-if table is one formula spilled over concentration × temperature
-    const whatIf = formulaCells(wb.getWorksheet('What-if')!).find((f) => f.formula.startsWith('ECHEM.HALFCELL('));
+    const whatIf = formulaCells(wb.getWorksheet('What-if')!).find((f) => f.formula.startsWith('CELLWRIGHT.HALFCELL('));
     expect(whatIf?.ref).toMatch(/^B\d+:F\d+$/);
   });
 
@@ -194,10 +194,10 @@ describe('demo/cellwright-demo.xlsx', () => {
 
   it('holds the key results of the scenario (spot checks against direct calls)', () => {
     const ws = wb.getWorksheet('CP survey')!;
-    const crit = formulaCells(ws).find((f) => f.formula.startsWith('ECHEM.CONVERTPOTENTIAL(0,"CSE","SCE")'))!;
+    const crit = formulaCells(ws).find((f) => f.formula.startsWith('CELLWRIGHT.CONVERTPOTENTIAL(0,"CSE","SCE")'))!;
     expect(same(crit.cached as Scalar, unwrap(bundle.call('CONVERTPOTENTIAL', [[0]], [['CSE']], [['SCE']])) as Scalar)).toBe(true);
     const plating = wb.getWorksheet('Plating')!;
-    const eq = formulaCells(plating).find((f) => f.formula.startsWith('ECHEM.ECEQUIV("Ni",'))!;
+    const eq = formulaCells(plating).find((f) => f.formula.startsWith('CELLWRIGHT.ECEQUIV("Ni",'))!;
     expect(same(eq.cached as Scalar, unwrap(bundle.call('ECEQUIV', 'Ni', 2)) as Scalar)).toBe(true);
   });
 });

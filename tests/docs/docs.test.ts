@@ -43,10 +43,10 @@ describe('docs/functions.md and docs/functions.html', () => {
     for (const f of metadata.functions) {
       const s = section(f.id);
       const optional = f.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
-      expect(s, f.id).toContain(`**Syntax** \`=ECHEM.${f.id}(${optional})\``);
+      expect(s, f.id).toContain(`**Syntax** \`=CELLWRIGHT.${f.id}(${optional})\``);
       for (const p of f.parameters) expect(s, `${f.id} ${p.name}`).toMatch(new RegExp(`\\| \`${p.name}\` \\| [^|]+ \\| (required|[^|]+) \\|`));
       expect(s, f.id).toMatch(/\*\*Result\*\* \S/);
-      expect(s, f.id).toMatch(/\*\*Example\*\* `=ECHEM\./);
+      expect(s, f.id).toMatch(/\*\*Example\*\* `=CELLWRIGHT\./);
       expect(s, f.id).toMatch(/\*\*See also\*\* \[/);
     }
   });

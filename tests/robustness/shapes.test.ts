@@ -34,7 +34,7 @@ function broadcastParams(id: string): number[] {
 
 describe('ranges that cannot be broadcast give one #VALUE! with a message', () => {
   it('NERNST: E0 2×3 against Q 3×2', () => {
-    const r = b.call('NERNST', block(2, 3, 0.34), 2, block(3, 2, 10));
+    const r = b.call('NERNST', block(2, 3, 0.352), 2, block(3, 2, 10));
     expect(r).toHaveLength(1);
     expect((r as unknown[][])[0]).toHaveLength(1);
     const e = (r as unknown[][])[0][0] as FakeError;
@@ -71,7 +71,7 @@ describe('ranges that cannot be broadcast give one #VALUE! with a message', () =
   });
 
   it('a column of 2 against a column of 3 is refused the same way', () => {
-    const r = b.call('NERNST', column(2, 0.34), 2, column(3, 10)) as unknown[][];
+    const r = b.call('NERNST', column(2, 0.352), 2, column(3, 10)) as unknown[][];
     expect(r).toHaveLength(1);
     expect((r[0][0] as FakeError).code).toBe('#VALUE!');
     expect((r[0][0] as FakeError).message).toContain('E0_V is 2×1, Q is 3×1');

@@ -79,7 +79,7 @@ describe('workbook copy: bringing it up to a newer built-in table', () => {
     const up = applyChange(copy, N, { kind: 'update-to-builtin' });
     expect(up.basedOn).toBe('2099.1');
     expect(up.couples.find((c) => c.key === 'Ag+/Ag')!.e0).toBe(0.8); // ours, kept
-    expect(up.couples.find((c) => c.key === 'Cu2+/Cu')!.e0).toBe(0.34); // newer built-in value
+    expect(up.couples.find((c) => c.key === 'Cu2+/Cu')!.e0).toBe(0.3521); // newer built-in value
     expect(up.couples.some((c) => c.key === 'Zn2+/Zn')).toBe(false); // deleted here, stays deleted
     expect(up.couples.some((c) => c.key === 'Tl+/Tl')).toBe(true); // new in the built-in table
     expect(up.couples.some((c) => c.key === 'Au+/Au')).toBe(false); // dropped from the built-in table

@@ -22,7 +22,7 @@ describe('CSV layout 1', () => {
 
   it('round-trips hostile text: quotes, commas, line breaks, markup and formula starts', () => {
     const rows = [
-      { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.34, source: '=HYPERLINK("http://x","y")', note: '<img src=x onerror=alert(1)>, "quoted"\nsecond line' },
+      { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.3521, source: '=HYPERLINK("http://x","y")', note: '<img src=x onerror=alert(1)>, "quoted"\nsecond line' },
       { key: 'Ag+/Ag', halfReaction: 'Ag+ + e- -> Ag', e0: 0.7996, source: '+1 lab, @team', note: '-minus start' },
       { key: 'Zn2+/Zn', halfReaction: 'Zn2+ + 2e- -> Zn', e0: -0.7618, source: "'=already quoted", note: "''two apostrophes" },
       { key: 'Ni2+/Ni', halfReaction: 'Ni2+ + 2e- -> Ni', e0: -0.257, source: "'plain apostrophe" },
@@ -44,7 +44,7 @@ describe('CSV layout 1', () => {
       '',
       'couple,Ag+/Ag,Ag+ + e- -> Ag,,0.7996,,,',
       'metal,X,,,1,,CRC,',
-      'couple,Cu(2+)/Cu,Cu2+ + 2e- -> Cu,,0.34,,CRC,',
+      'couple,Cu(2+)/Cu,Cu2+ + 2e- -> Cu,,0.3521,,CRC,',
       'couple,Ni2+/Ni,Ni2+ + 2e- -> Ni,,-0.257,,CRC',
       'couple,Pb2+/Pb,Pb2+ + 2e- -> Pb,,"-0,126",,CRC,',
       'couple,Sn2+/Sn,Sn2+ + 2e- -> Sn,,9.5,,CRC,',
@@ -92,7 +92,7 @@ describe('CSV layout 1', () => {
   it('round-trips any printable source and note text', () => {
     fc.assert(
       fc.property(fc.string({ minLength: 1, maxLength: 60 }).filter((s) => s.trim() !== '' && s === s.trim()), fc.string({ maxLength: 60 }), (source, note) => {
-        const row = { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.34, source, ...(note.trim() === '' ? {} : { note: note.trim() }) };
+        const row = { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.3521, source, ...(note.trim() === '' ? {} : { note: note.trim() }) };
         const r = importCsv(exportCsv({ couples: [row], electrodes: [] }, 't'));
         return r.rejected.length === 0 && JSON.stringify(r.couples[0]) === JSON.stringify(row);
       }),

@@ -12,7 +12,7 @@ export function builtin(): VersionedRecords {
 
 /** A built-in table of another version, for update tests: one E° changed, one row dropped, one row added. */
 export function newerBuiltin(b: VersionedRecords, version = '2099.1'): VersionedRecords {
-  const couples = b.couples.map((c) => (c.key === 'Cu2+/Cu' ? { ...c, e0: 0.3400 } : c)).filter((c) => c.key !== 'Au+/Au');
+  const couples = b.couples.map((c) => (c.key === 'Cu2+/Cu' ? { ...c, e0: 0.3521 } : c)).filter((c) => c.key !== 'Au+/Au');
   couples.push({ key: 'Tl+/Tl', halfReaction: 'Tl+ + e- -> Tl', e0: -0.336, source: 'test data: a row new in the newer built-in table' });
   return { version, couples, electrodes: b.electrodes };
 }

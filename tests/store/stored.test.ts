@@ -17,7 +17,7 @@ const written = (c = pinnedCopy(B), revision = 1) => writeStoredText({ ...c, rev
 
 describe('stored table: round trip', () => {
   it('reads back what it wrote, with the same rows, checksum and revision', () => {
-    const edited = applyChange(null, B, { kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...B.couples.find((c) => c.key === 'Cu2+/Cu')!, e0: 0.34, source: 'our lab, 2026' } });
+    const edited = applyChange(null, B, { kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...B.couples.find((c) => c.key === 'Cu2+/Cu')!, e0: 0.3521, source: 'our lab, 2026' } });
     const text = written(edited, 7);
     const r = readStoredText(text, B);
     expect(r.ok).toBe(true);
@@ -26,7 +26,7 @@ describe('stored table: round trip', () => {
     expect(r.copy.revision).toBe(7);
     expect(r.copy.couples).toEqual(edited.couples);
     expect(r.copy.own.couples).toEqual(['Cu2+/Cu']);
-    expect(r.table.findCouple('Cu(2+)/Cu')!.e0).toBe(0.34);
+    expect(r.table.findCouple('Cu(2+)/Cu')!.e0).toBe(0.3521);
     expect(r.table.findCouple('Cu2+/Cu')!.n).toBe(2);
     expect(r.checksum).toBe(contentChecksum(edited));
     expect(writeStoredText(r.copy)).toBe(text);

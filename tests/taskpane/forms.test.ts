@@ -32,7 +32,7 @@ describe('couple form, checked as you type', () => {
   it('reads numbers people type: a leading minus sign, a plus, exponents; not a decimal comma; E° within ±4 V', () => {
     expect(readNumber('−0.76', 'E°', { min: -4, max: 4 }, 'V', true)).toBe(-0.76);
     expect(readNumber('+1.5e-1', 'E°', { min: -4, max: 4 }, 'V', true)).toBe(0.15);
-    expect(readNumber('0,34', 'E°', { min: -4, max: 4 }, 'V', true)).toEqual({ error: 'write E° with a decimal point (0.34)' });
+    expect(readNumber('0,25', 'E°', { min: -4, max: 4 }, 'V', true)).toEqual({ error: 'write E° with a decimal point (0.25)' });
     expect(readNumber('5', 'E°', { min: -4, max: 4 }, 'V', true)).toEqual({ error: 'E° must lie between -4 and 4 V' });
     expect(readNumber('', 'dE/dT', { min: -5, max: 5 }, 'mV/K', false)).toBeUndefined();
   });

@@ -6,7 +6,7 @@
  * would show after the change.
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { E0 } from '../../functions/families/table';
+import { STDPOTENTIAL } from '../../functions/families/table';
 import { installFunctionsHost, useStoredValue } from '../../functions/workbookHost';
 import { TABLE_SETTING_KEY } from '../../functions/workbookStore';
 import { exportCsv, importCsv } from '../../src/store/csv';
@@ -26,9 +26,9 @@ function model(b: VersionedRecords = B): TableModel {
   return new TableModel({ builtin: b, host: () => globalThis.cellwrightFunctionsHost, now: () => new Date('2026-03-04T05:06:07Z') });
 }
 
-/** What a cell =ECHEM.E0(key) shows now. */
+/** What a cell =CELLWRIGHT.STDPOTENTIAL(key) shows now. */
 async function cellE0(key: string): Promise<unknown> {
-  const r = (await E0([[key]], null as never)) as unknown[][];
+  const r = (await STDPOTENTIAL([[key]], null as never)) as unknown[][];
   return r[0][0];
 }
 
@@ -308,7 +308,7 @@ describe('pin and a newer built-in table', () => {
     expect(notice.addinIsNewer).toBe(true);
     expect(notice.changes.map((d) => `${d.key}:${d.status}`).sort()).toEqual(['Au+/Au:removed', 'Cu2+/Cu:changed', 'Tl+/Tl:added']);
     expect((await b.change({ kind: 'update-to-builtin' })).kind).toBe('done');
-    expect(await cellE0('Cu2+/Cu')).toBe(0.34);
+    expect(await cellE0('Cu2+/Cu')).toBe(0.3521);
     expect(await cellE0('Ag+/Ag')).toBe(0.8);
     expect(b.builtinNotice()).toBeNull();
   });

@@ -25,7 +25,7 @@ function storedWithCu(e0: number, revision = 1): string {
 
 type Fn = (...a: unknown[]) => unknown;
 interface Started {
-  E0: Fn;
+  STDPOTENTIAL: Fn;
   context: typeof import('../../functions/context');
 }
 
@@ -35,11 +35,11 @@ async function startRuntime(): Promise<Started> {
   await import('../../functions/runtime');
   const table = await import('../../functions/families/table');
   const context = await import('../../functions/context');
-  return { E0: table.E0 as unknown as Fn, context };
+  return { STDPOTENTIAL: table.STDPOTENTIAL as unknown as Fn, context };
 }
 
-async function cell(E0: Fn, key: string): Promise<unknown> {
-  const r = E0([[key]], null);
+async function cell(STDPOTENTIAL: Fn, key: string): Promise<unknown> {
+  const r = STDPOTENTIAL([[key]], null);
   expect(r).toBeDefined();
   return ((await r) as unknown[][])[0][0];
 }
@@ -56,10 +56,10 @@ afterEach(() => {
 
 describe('functions runtime start-up', () => {
   it('without Office it does nothing: no channel, no waiting, the built-in table answers', async () => {
-    const { E0, context } = await startRuntime();
+    const { STDPOTENTIAL, context } = await startRuntime();
     expect(globalThis.cellwrightFunctionsHost).toBeUndefined();
     expect(context.tablePending()).toBeNull();
-    const r = E0([['Cu2+/Cu']], null);
+    const r = STDPOTENTIAL([['Cu2+/Cu']], null);
     expect(r).not.toBeInstanceOf(Promise);
     expect((r as unknown[][])[0][0]).toBe(cuBuiltin);
   });
@@ -70,10 +70,10 @@ describe('functions runtime start-up', () => {
     file.gate = new Promise<void>((r) => (open = r));
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
-    const { E0, context } = await startRuntime();
+    const { STDPOTENTIAL, context } = await startRuntime();
     expect(context.tablePending()).not.toBeNull();
     expect(globalThis.cellwrightFunctionsHost!.status().state).toBe('loading');
-    const pending = E0([['Cu2+/Cu']], null);
+    const pending = STDPOTENTIAL([['Cu2+/Cu']], null);
     expect(pending).toBeInstanceOf(Promise); // the cell waits
     open();
     expect(((await pending) as unknown[][])[0][0]).toBe(0.35);
@@ -87,8 +87,8 @@ describe('functions runtime start-up', () => {
     const file = new WorkbookFile();
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
-    const { E0 } = await startRuntime();
-    expect(await cell(E0, 'Cu2+/Cu')).toBe(cuBuiltin);
+    const { STDPOTENTIAL } = await startRuntime();
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(cuBuiltin);
     expect(globalThis.cellwrightFunctionsHost!.status().state).toBe('builtin');
   });
 
@@ -97,8 +97,8 @@ describe('functions runtime start-up', () => {
     const file = new WorkbookFile({ [TABLE_SETTING_KEY]: damaged });
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
-    const { E0 } = await startRuntime();
-    const v = (await cell(E0, 'Cu2+/Cu')) as FakeCfError;
+    const { STDPOTENTIAL } = await startRuntime();
+    const v = (await cell(STDPOTENTIAL, 'Cu2+/Cu')) as FakeCfError;
     expect(v).toBeInstanceOf(FakeCfError);
     expect(v.code).toBe('#N/A');
     expect(v.message).toMatch(/^the workbook's potential table could not be read: the checksum does not match/);
@@ -109,8 +109,8 @@ describe('functions runtime start-up', () => {
   it('a failing read makes look-ups answer #N/A rather than fall back', async () => {
     g.Office = officeFor('Excel');
     g.Excel = { run: async () => Promise.reject(new Error('GeneralException')), CalculationType: { full: 'Full' } };
-    const { E0 } = await startRuntime();
-    const v = (await cell(E0, 'Cu2+/Cu')) as FakeCfError;
+    const { STDPOTENTIAL } = await startRuntime();
+    const v = (await cell(STDPOTENTIAL, 'Cu2+/Cu')) as FakeCfError;
     expect(v.code).toBe('#N/A');
     expect(v.message).toMatch(/reading it failed: GeneralException/);
   });
@@ -118,15 +118,15 @@ describe('functions runtime start-up', () => {
   it('an Excel without ExcelApi 1.4 cannot read the table: #N/A, saying so', async () => {
     g.Office = officeFor('Excel', false);
     g.Excel = excelFor(new WorkbookFile());
-    const { E0 } = await startRuntime();
-    expect(((await cell(E0, 'Cu2+/Cu')) as FakeCfError).message).toMatch(/ExcelApi 1.4/);
+    const { STDPOTENTIAL } = await startRuntime();
+    expect(((await cell(STDPOTENTIAL, 'Cu2+/Cu')) as FakeCfError).message).toMatch(/ExcelApi 1.4/);
   });
 
   it('outside Excel (office.js in a plain browser page) there is no workbook: the built-in table', async () => {
     g.Office = officeFor(null);
     g.Excel = excelFor(new WorkbookFile());
-    const { E0 } = await startRuntime();
-    expect(await cell(E0, 'Cu2+/Cu')).toBe(cuBuiltin);
+    const { STDPOTENTIAL } = await startRuntime();
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(cuBuiltin);
   });
 
   it('when Excel does not answer in time the functions say so (#N/A), then use the late answer and recalculate', async () => {
@@ -136,9 +136,9 @@ describe('functions runtime start-up', () => {
     file.gate = new Promise<void>((r) => (open = r));
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
-    const { E0, context } = await startRuntime();
+    const { STDPOTENTIAL, context } = await startRuntime();
     const { START_TIMEOUT_MS } = await import('../../functions/runtime');
-    const waiting = E0([['Cu2+/Cu']], null) as Promise<unknown[][]>;
+    const waiting = STDPOTENTIAL([['Cu2+/Cu']], null) as Promise<unknown[][]>;
     await vi.advanceTimersByTimeAsync(START_TIMEOUT_MS + 10);
     const v = (await waiting)[0][0] as FakeCfError;
     expect(v.code).toBe('#N/A');
@@ -147,7 +147,7 @@ describe('functions runtime start-up', () => {
     open();
     await vi.waitFor(() => expect(file.calculations).toEqual(['Full']));
     expect(context.tableInUse().kind).toBe('workbook');
-    expect(await cell(E0, 'Cu2+/Cu')).toBe(0.35);
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(0.35);
   });
 
   it('the pane can hand over a new table while the start-up read is still running: the pane wins', async () => {
@@ -156,24 +156,24 @@ describe('functions runtime start-up', () => {
     file.gate = new Promise<void>((r) => (open = r));
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
-    const { E0, context } = await startRuntime();
+    const { STDPOTENTIAL, context } = await startRuntime();
     globalThis.cellwrightFunctionsHost!.useStoredValue(storedWithCu(0.36, 2));
     open();
     await context.tablePending();
-    expect(await cell(E0, 'Cu2+/Cu')).toBe(0.36);
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(0.36);
   });
 
   it('a table changed elsewhere (settings changed event) is read, used and recalculated', async () => {
     const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35, 1) });
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
-    const { E0 } = await startRuntime();
-    expect(await cell(E0, 'Cu2+/Cu')).toBe(0.35);
+    const { STDPOTENTIAL } = await startRuntime();
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(0.35);
     await vi.waitFor(() => expect(file.settingsChangedHandlers.length).toBe(1));
     // A co-author's write arrives.
     file.settings.set(TABLE_SETTING_KEY, storedWithCu(0.37, 2));
     await file.settingsChangedHandlers[0]({ type: 'SettingsChanged' });
-    expect(await cell(E0, 'Cu2+/Cu')).toBe(0.37);
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(0.37);
     expect(file.calculations).toEqual(['Full']);
     // The same value again (e.g. the event for this runtime's own write): nothing to do.
     await file.settingsChangedHandlers[0]({ type: 'SettingsChanged' });
@@ -188,21 +188,21 @@ describe('the production bundle dist/functions.js in node:vm', () => {
   it('with Office and Excel present it waits for the workbook table and offers the channel', async () => {
     const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35) });
     const b = loadBundle({ Office: officeFor('Excel'), Excel: excelFor(file), setTimeout, clearTimeout, console });
-    const r = b.call('E0', [['Cu2+/Cu']]);
+    const r = b.call('STDPOTENTIAL', [['Cu2+/Cu']]);
     expect(typeof (r as { then?: unknown }).then).toBe('function'); // a promise of the sandbox: the cell waits
     expect(((await r) as unknown[][])[0][0]).toBe(0.35);
     const host = b.sandbox.cellwrightFunctionsHost as { useStoredValue(v: unknown): { state: string }; status(): { state: string } };
     expect(host.status().state).toBe('workbook');
     expect(host.useStoredValue(null).state).toBe('builtin');
-    expect((b.call('E0', [['Cu2+/Cu']]) as unknown[][])[0][0]).toBe(cuBuiltin);
+    expect((b.call('STDPOTENTIAL', [['Cu2+/Cu']]) as unknown[][])[0][0]).toBe(cuBuiltin);
     expect(host.useStoredValue('not ours').state).toBe('unreadable');
-    const na = (b.call('E0', [['Cu2+/Cu']]) as unknown[][])[0][0] as { code: string; message: string };
+    const na = (b.call('STDPOTENTIAL', [['Cu2+/Cu']]) as unknown[][])[0][0] as { code: string; message: string };
     expect(na.code).toBe('#N/A');
     expect(host.useStoredValue(writeStoredText({ ...pinnedCopy(B), revision: 4, changedAt: '' })).state).toBe('workbook');
   });
   it('with only CustomFunctions present it registers the functions and answers from the built-in table', () => {
     const b = loadBundle();
     expect(b.sandbox.cellwrightFunctionsHost).toBeUndefined();
-    expect((b.call('E0', [['Cu2+/Cu']]) as unknown[][])[0][0]).toBe(cuBuiltin);
+    expect((b.call('STDPOTENTIAL', [['Cu2+/Cu']]) as unknown[][])[0][0]).toBe(cuBuiltin);
   });
 });
