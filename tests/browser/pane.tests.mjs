@@ -226,7 +226,7 @@ export const tests = [
       assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
       await shot(page, '05-edit-validation-errors', '#editor-couple');
       assert.equal(await stored(page), null);
-      await page.fill('#f-couple-e0', '0.340');
+      await page.fill('#f-couple-e0', '0.3521');
       await page.fill('#f-couple-source', 'Plant QA measurement, 2026-02');
       await page.click('#save-couple');
       await waitIdle(page);
@@ -352,7 +352,7 @@ export const tests = [
       assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3377); // pinned values, not the add-in's
       const newer = await text(page, '#newer-builtin');
       assert.match(newer, new RegExp(`built-in table ${BUILTIN_VERSION} is newer than 2025\\.1`));
-      assert.match(newer, /Updating would change 1 row: couple Cu2\+\/Cu: E° 0\.337 → 0\.3419 V/);
+      assert.match(newer, /Updating would change 1 row: couple Cu2\+\/Cu: E° 0\.3377 → 0\.3419 V/);
       await fitsWidth(page);
       await shot(page, '08-newer-built-in-table');
       await page.click('#update-builtin');
@@ -374,7 +374,7 @@ export const tests = [
         'row_type,key,half_reaction,other_names,potential_V,dEdT_mV_per_K,source,note',
         'couple,Tl+/Tl,Tl+ + e- -> Tl,,-0.336,,Lab 2026,',
         'couple,In3+/In,In3+ + 3e- -> In,,abc,,Lab 2026,',
-        'couple,Cu2+/Cu,Cu2+ + 2e- -> Cu,,0.340,0.011,Plant QA,"re-measured, see ""log"""',
+        'couple,Cu2+/Cu,Cu2+ + 2e- -> Cu,,0.3521,0.011,Plant QA,"re-measured, see ""log"""',
         'electrode,Plant SCE,,plant calomel|bench SCE,0.244,-0.67,Lab 2026,',
         'couple,Ga3+/Ga,Ga3+ + 2e- -> Ga,,-0.549,,Lab 2026,',
       ].join('\n');
