@@ -45,10 +45,10 @@ function halfReaction(couple: any[][]): any[][] {
 }
 
 /**
- * The published source of a couple's E° (and dE°/dT), as text.
+ * The published source of a couple's E° (and dE°/dT), or of a reference electrode's potential, as text.
  * @customfunction SOURCE
  * @helpurl https://localhost:3000/docs/functions.html#source
- * @param couple Key of the potential table, written Ox/Red.
+ * @param couple Key of the potential table: a couple written Ox/Red, or a reference electrode (e.g. "CSE").
  * @returns The source (text).
  */
 function source(couple: any[][]): any[][] {

@@ -32,7 +32,7 @@ export const PLAUSIBLE = {
     hints: [{ lo: 5, hi: 1000, says: 'looks like mV/decade, or a polarization resistance given in place of a Tafel slope; this argument is in V/decade (120 mV/decade is 0.12)' }],
   },
   /** A polarization resistance in Ω·cm². */
-  rpOhmCm2: { lo: 0.01, hi: 1e9, range: '0.01 to 1e9 Ω·cm²', hints: [{ lo: 1e-6, hi: 0.01, says: 'looks like a Tafel slope (in V/decade) in place of the polarization resistance; check the order of the arguments' }] },
+  rpOhmCm2: { lo: 1, hi: 1e9, range: '1 to 1e9 Ω·cm²', hints: [{ lo: 1e-6, hi: 1, says: 'looks like a Tafel slope (in V/decade) in place of the polarization resistance; check the order of the arguments' }] },
   /** An equivalent weight in g. */
   equivalentWeightG: { lo: 2, hi: 250, range: '2 to 250 g', hints: [{ lo: 0.002, hi: 0.25, says: 'looks like kg; this argument is in g (iron is 27.92)' }] },
   /** A design or exposure time in years. */
