@@ -49,8 +49,9 @@ function halfReaction(couple: any[][]): any[][] {
  * @customfunction SOURCE
  * @helpurl https://localhost:3000/docs/functions.html#source
  * @param couple Key of the potential table: a couple written Ox/Red, or a reference electrode (e.g. "CSE").
+ * @param [criterion] With an electrode key: a protection-criterion condition ("standard", "polarisation", "limit"), to get the clause and source of PROTECTIONCRITERION's answer.
  * @returns The source (text).
  */
-function source(couple: any[][]): any[][] {
-  return F.SOURCE(couple) as any;
+function source(couple: any[][], criterion?: any[][]): any[][] {
+  return F.SOURCE(couple, criterion) as any;
 }

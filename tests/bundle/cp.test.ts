@@ -30,6 +30,8 @@ describe('PROTECTIONCRITERION and SOURCE', () => {
     expect(one(await call('SOURCE', 'CSE'))).toMatch(/Szabó & Bakos/);
     expect(one(await call('SOURCE', 'Cu2+/Cu'))).toMatch(/CRC/);
     expect(isError(one(await call('SOURCE', 'nothing')), '#N/A')).toBe(true);
+    expect(one(await call('SOURCE', 'Ag/AgCl/seawater', 'standard'))).toMatch(/DNV-RP-B401 Sec\. 5.*Source: /);
+    expect(one(await call('SOURCE', 'CSE', null))).toMatch(/Szabó & Bakos/);
   });
 });
 
