@@ -43,7 +43,7 @@ function overpotential(i: any[][], i0: any[][], alpha_a: any[][], alpha_c?: any[
  * Tafel slope RT·ln10/(αF), in V per decade (0.118 V for α = 0.5 at 25 °C).
  * @customfunction TAFELSLOPE
  * @helpurl https://localhost:3000/docs/functions.html#tafelslope
- * @param alpha Apparent transfer coefficient (> 0, n included).
+ * @param alpha Apparent transfer coefficient (> 0, n included; 0.01 to 4, a value like 50 is refused as a percentage).
  * @param [temperature_C] Temperature in °C (default 25).
  * @returns V per decade.
  */

@@ -26,7 +26,11 @@ export const OVERPOTENTIAL = worksheet({
   compute: overpotential,
 });
 
-export const TAFELSLOPE = worksheet({ id: 'TAFELSLOPE', args: [num('alpha', domains.positive, ''), temperatureC], compute: tafelSlope });
+export const TAFELSLOPE = worksheet({
+  id: 'TAFELSLOPE',
+  args: [num('alpha', domains.positive, ''), temperatureC],
+  compute: (a: number, t: number) => tafelSlope(plausible('alpha', a, PLAUSIBLE.alpha), t),
+});
 
 export const CORROSIONRATE = worksheet({
   id: 'CORROSIONRATE',

@@ -35,6 +35,8 @@ export const PLAUSIBLE = {
   rpOhmCm2: { lo: 1, hi: 1e9, range: '1 to 1e9 Ω·cm²', hints: [{ lo: 1e-6, hi: 1, says: 'looks like a Tafel slope (in V/decade) in place of the polarization resistance; check the order of the arguments' }] },
   /** An equivalent weight in g. */
   equivalentWeightG: { lo: 2, hi: 250, range: '2 to 250 g', hints: [{ lo: 0.002, hi: 0.25, says: 'looks like kg; this argument is in g (iron is 27.92)' }] },
+  /** An apparent transfer coefficient (n included). */
+  alpha: { lo: 0.01, hi: 4, range: '0.01 to 4', hints: [{ lo: 5, hi: 100, says: 'looks like a percentage; give the fraction (0.5 for 50 %)' }] },
   /** A design or exposure time in years. */
   years: { lo: 0, hi: 200, range: '0 to 200 years', hints: [{ lo: 200, hi: 2e6, says: 'looks like hours or days; this argument is in years' }] },
   /** An anode capacity in A·h/kg. */

@@ -120,5 +120,7 @@ describe('corrosion rates and materials', () => {
     expect(msg(mv)).toMatch(/mV\/decade/);
     expect(isError(one(await call('STERNGEARY', 1000, 0.12, 0.12)), '#VALUE!')).toBe(true);
     expect(msg(one(await call('CORROSIONRATE', 1, 27.92, 7870)))).toMatch(/kg\/m³/);
+    expect(msg(one(await call('TAFELSLOPE', 50)))).toMatch(/percentage/);
+    expect(one(await call('TAFELSLOPE', 0.5))).toBeCloseTo(0.1183, 4);
   });
 });

@@ -89,7 +89,10 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(currentDemand(1000, 0.1, 0.3)).toBeCloseTo(30, 12);
     expect(() => currentDemand(1000, 100, 0.3)).toThrow(/mA\/m²/);
   });
-  it('Table 10-7 resistances (independent evaluation of the printed formulas; no worked example read)', () => {
+  // Table 10-7: no worked example could be read; the values are an independent evaluation of the formulas. The validity
+  // conditions (L ≥ 4r; ≥ 0.30 m stand-off, ×1.3 from 0.15 m; flush L ≥ 4·width and 4·thickness; S = mean of length and
+  // width) were read in 'Anode Resistance equations' (A. Abdelraouf, CP project notes 2021–22, pdfcoffee.com/anode-r-pdf-free.html).
+  it('Table 10-7 resistances and their validity conditions', () => {
     expect(anodeResistance('long-standoff', 0.3, dims({ lengthM: 2, radiusM: 0.1 }))).toBeCloseTo(0.0807399, 6);
     expect(anodeResistance('long-standoff', 0.3, dims({ lengthM: 2, radiusM: 0.1, standoffM: 0.2 }))).toBeCloseTo(0.0807399 * 1.3, 6);
     expect(anodeResistance('short-standoff', 0.3, dims({ lengthM: 0.3, radiusM: 0.1 }))).toBeCloseTo(0.2617546, 6);
