@@ -41,7 +41,7 @@ describe('protectionCriterion: criteria as the standards state them, per electro
   });
   it('100 mV polarisation is a separate condition, a shift not a potential', () => {
     const r = protectionCriterion('CSE', 'polarization');
-    expect(r.value).toBe(0.1); // NACE/AMPP SP0169 100 mV criterion (common practice)
+    expect(r.value).toBe(0.1); // MIL-HDBK-1004/10 §3.3.1.1(b); NACE/AMPP SP0169
     expect(r.kind).toBe('shift');
   });
   it('the most negative potential in seawater', () => {
