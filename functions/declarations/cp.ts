@@ -32,7 +32,7 @@ function polarizationShift(instant_off_V: any[][], native_V: any[][]): any[][] {
 }
 
 /**
- * IR drop ON − instant-OFF, in V. The instant-OFF reading is the estimate of the IR-free (polarised) potential; an ON reading is not IR-free. An OFF reading more negative than ON is refused as swapped.
+ * IR drop ON − instant-OFF, in V: negative when protective current flows onto the structure; positive means current leaving the structure there (interference) or swapped readings, for the CP engineer to check. The instant-OFF reading is the estimate of the IR-free (polarised) potential; an ON reading is not IR-free.
  * @customfunction IRDROP
  * @helpurl https://localhost:3000/docs/functions.html#irdrop
  * @param on_V ON potential (current flowing), V.
