@@ -23,7 +23,7 @@ function emf(cathode: any[][], anode: any[][], temperature_C?: any[][]): any[][]
 }
 
 /**
- * Arranges two couples as a galvanic cell: spills 1×3 [E°cell in V (≥ 0), cathode key, anode key].
+ * Arranges two couples as a galvanic cell: spills 1×3 [E°cell in V (≥ 0), cathode key, anode key]. It compares standard potentials, not the potentials metals take in service: not a design driving voltage for anodes (ANODEDATA, ANODEOUTPUT) nor a galvanic series (GALVANICSERIES; passive stainless steel, for one, is noble in seawater).
  * @customfunction GALVANIC
  * @helpurl https://localhost:3000/docs/functions.html#galvanic
  * @param couple1 A couple key (e.g. "Zn2+/Zn").

@@ -10,7 +10,7 @@
 import * as F from '../families/scales';
 
 /**
- * Potential of a reference electrode vs SHE, in V, from the electrode table; at another temperature E(25 °C) + (dE/dT)·(T − 25).
+ * Potential of a reference electrode vs SHE, in V, from the electrode table; at another temperature E(25 °C) + (dE/dT)·(T − 25). For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.
  * @customfunction REFPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#refpotential
  * @param electrode Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).
@@ -22,7 +22,7 @@ function refPotential(electrode: any[][], temperature_C?: any[][]): any[][] {
 }
 
 /**
- * The same potential on another scale, in V: "SHE", "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table.
+ * The same potential on another scale, in V: "SHE", "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table, both electrodes taken at the stated temperature. Not for cathodic-protection criteria: the standards state −0.80 V Ag/AgCl/seawater, while −0.85 V CSE converts to about −0.78 V; compare a reading with the criterion stated for its own electrode (PROTECTIONCRITERION).
  * @customfunction CONVERTPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#convertpotential
  * @param potential_V Potential on the from_scale, in V.

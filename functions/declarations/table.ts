@@ -45,12 +45,13 @@ function halfReaction(couple: any[][]): any[][] {
 }
 
 /**
- * The published source of a couple's E° (and dE°/dT), as text.
+ * The published source of a couple's E° (and dE°/dT), or of a reference electrode's potential, as text.
  * @customfunction SOURCE
  * @helpurl https://localhost:3000/docs/functions.html#source
- * @param couple Key of the potential table, written Ox/Red.
+ * @param couple Key of the potential table: a couple written Ox/Red, or a reference electrode (e.g. "CSE").
+ * @param [criterion] With an electrode key: a protection-criterion condition ("standard", "polarisation", "limit"), to get the clause and source of PROTECTIONCRITERION's answer.
  * @returns The source (text).
  */
-function source(couple: any[][]): any[][] {
-  return F.SOURCE(couple) as any;
+function source(couple: any[][], criterion?: any[][]): any[][] {
+  return F.SOURCE(couple, criterion) as any;
 }

@@ -147,13 +147,14 @@ describe('solutions', () => {
 
 describe('kinetics and corrosion', () => {
   it('BUTLERVOLMER and OVERPOTENTIAL are inverses, through the bundle, over a column of overpotentials', async () => {
-    const etas = [[-2], [-0.2], [0], [1e-6], [0.3], [15]];
+    const etas = [[-2], [-0.2], [0], [1e-6], [0.3], [4]];
     const i = (await run('BUTLERVOLMER', 1e-3, etas, 0.5)) as number[][];
     const back = (await run('OVERPOTENTIAL', i, 1e-3, 0.5)) as number[][];
     etas.forEach(([eta], k) => expect(Math.abs(back[k][0] - eta)).toBeLessThanOrEqual(1e-9));
   });
-  it('BUTLERVOLMER beyond double range is #NUM!; alpha_a ≥ 1 without alpha_c is #NUM!', async () => {
-    expect(isError(one(await run('BUTLERVOLMER', 1, 60, 0.5)), '#NUM!')).toBe(true);
+  it('BUTLERVOLMER beyond double range is #NUM!; alpha_a ≥ 1 without alpha_c is #NUM!; millivolts are refused', async () => {
+    expect(isError(one(await run('BUTLERVOLMER', 1, 2, 10, 0.5)), '#NUM!')).toBe(true);
+    expect(isError(one(await run('BUTLERVOLMER', 1, 60, 0.5)), '#VALUE!')).toBe(true);
     expect(isError(one(await run('BUTLERVOLMER', 1, 0.1, 1.2)), '#NUM!')).toBe(true);
     expect(one(await run('BUTLERVOLMER', 1, 0.1, 1.2, 0.8))).toBeGreaterThan(0);
   });

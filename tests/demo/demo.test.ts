@@ -94,7 +94,9 @@ describe('npm run demo', () => {
   it('prints inputs, formulas and results with units', () => {
     // one quantity line: address, label, value, unit, formula
     expect(run.stdout).toMatch(/B\d+\s+Plating time to the specified thickness\s+\d+\.\d\s+min\s+=CELLWRIGHT\.PLATETIME\(/);
-    expect(run.stdout).toMatch(/Contract criterion, polarized \(instant-off\) potential[\s\S]*?-0\.85\s+V vs CSE\s+input/);
+    expect(run.stdout).toMatch(/B\d+\s+Soil temperature at pipe depth\s+10\s+°C\s+input/);
+    // the CP sheet takes its criteria per electrode as stated, beside the readings
+    expect(run.stdout).toMatch(/=CELLWRIGHT\.PROTECTIONCRITERION\(C\d+:C\d+\) \(one formula, spilled 8×1\)/);
     // a spilled table with the formula and the range it filled
     expect(run.stdout).toMatch(/B\d+:F\d+ =CELLWRIGHT\.HALFCELL\(.*\) \(one formula, spilled 8×5\)/);
   });

@@ -1,0 +1,172 @@
+/**
+ * Cathodic-protection core: criteria as stated, survey helpers, galvanic-anode design (DNV-RP-B401),
+ * impressed-current groundbeds, soil and seawater resistivity.
+ */
+import { describe, expect, it } from 'vitest';
+import { anodeCount } from '../../src/cp/anodeCount';
+import { anodeData } from '../../src/cp/anodeData';
+import { anodeLife } from '../../src/cp/anodeLife';
+import { anodeMass } from '../../src/cp/anodeMass';
+import { anodeOutput } from '../../src/cp/anodeOutput';
+import { anodeResistance, type AnodeDims } from '../../src/cp/anodeResistance';
+import { cableDrop } from '../../src/cp/cableDrop';
+import { coatingBreakdown } from '../../src/cp/coatingBreakdown';
+import { currentDemand } from '../../src/cp/currentDemand';
+import { groundbedResistance } from '../../src/cp/groundbedResistance';
+import { irDrop } from '../../src/cp/irDrop';
+import { layerResistivity } from '../../src/cp/layerResistivity';
+import { polarisationShift } from '../../src/cp/polarisationShift';
+import { protectionCriterion } from '../../src/cp/protectionCriterion';
+import { readingAt25 } from '../../src/cp/readingAt25';
+import { rectifierVoltage } from '../../src/cp/rectifierVoltage';
+import { salinityFromRatio } from '../../src/cp/salinityFromRatio';
+import { seawaterResistivity } from '../../src/cp/seawaterResistivity';
+import { wennerResistivity } from '../../src/cp/wennerResistivity';
+import { InputError, NotFoundError } from '../../src/errors';
+import { builtinTable } from '../../src/table/builtin';
+
+const dims = (d: Partial<AnodeDims>): AnodeDims => ({ lengthM: null, radiusM: null, widthM: null, thicknessM: null, areaM2: null, standoffM: null, ...d });
+
+describe('protectionCriterion: criteria as the standards state them, per electrode', () => {
+  it('−0.85 V CSE, −0.80 V Ag/AgCl/seawater, +0.25 V vs zinc', () => {
+    expect(protectionCriterion('CSE', 'standard').value).toBe(-0.85); // NACE 1958 criterion; NACE/AMPP SP0169
+    expect(protectionCriterion('Ag/AgCl/seawater', 'standard').value).toBe(-0.8); // DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2
+    expect(protectionCriterion('Zn/seawater', 'standard').value).toBe(0.25); // Pipeline Rules of Thumb Handbook p. 219 (Peabody 1973)
+  });
+  it('the seawater criterion is the stated −0.80 V, not −0.85 V CSE converted (−0.784 V)', () => {
+    const t = builtinTable();
+    const converted = -0.85 + t.findElectrode('CSE')!.potential - t.findElectrode('Ag/AgCl/seawater')!.potential;
+    expect(converted).toBeCloseTo(-0.784, 3);
+    expect(protectionCriterion('Ag/AgCl/seawater', '').value).toBeLessThan(converted);
+  });
+  it('100 mV polarisation is a separate condition, a shift not a potential', () => {
+    const r = protectionCriterion('CSE', 'polarization');
+    expect(r.value).toBe(0.1); // MIL-HDBK-1004/10 §3.3.1.1(b); NACE/AMPP SP0169
+    expect(r.kind).toBe('shift');
+  });
+  it('the most negative potential in seawater', () => {
+    expect(protectionCriterion('Ag/AgCl/seawater', 'limit').value).toBe(-1.1); // ISO 15589-2 §5.2 (as transcribed)
+  });
+  it('conditions whose value was not read, and other electrodes, answer not-found with where to look', () => {
+    expect(() => protectionCriterion('CSE', 'SRB')).toThrow(/sulfate-reducing/);
+    expect(() => protectionCriterion('CSE', 'high temperature')).toThrow(NotFoundError);
+    expect(() => protectionCriterion('CSE', 'highstrength')).toThrow(/550 MPa/);
+    expect(() => protectionCriterion('SCE', 'standard')).toThrow(/do not convert/);
+    expect(() => protectionCriterion('CSE', 'wet')).toThrow(InputError);
+  });
+});
+
+describe('survey helpers', () => {
+  it('polarisation shift and IR drop (independent arithmetic)', () => {
+    expect(polarisationShift(-0.78, -0.65)).toBeCloseTo(0.13, 12);
+    expect(irDrop(-1.2, -0.92)).toBeCloseTo(-0.28, 12);
+    // positive: current leaving the structure (interference) or swapped readings, reported as it is
+    expect(irDrop(-0.92, -1.2)).toBeCloseTo(0.28, 12);
+  });
+  it('reading referred to the electrode at 25 °C through the electrode temperature function of the table', () => {
+    const cse = builtinTable().findElectrode('CSE')!;
+    // CSE dE/dT 0.9 mV/K in the table: at 35 °C the electrode sits 9 mV higher, so the reading is 9 mV less negative at 25 °C
+    expect(readingAt25(-0.85, cse, 35)).toBeCloseTo(-0.85 + 0.009, 9);
+    expect(readingAt25(-0.85, cse, 25)).toBe(-0.85);
+    expect(() => readingAt25(-0.8, builtinTable().findElectrode('Ag/AgCl/seawater')!, 30)).toThrow(NotFoundError);
+  });
+});
+
+describe('galvanic-anode design (DNV-RP-B401)', () => {
+  it('§7.6.2 anode mass: 10 A, 25 y, 2000 A·h/kg, u = 0.90 → 1216.7 kg (divides by u·ε)', () => {
+    expect(anodeMass(10, 25, 2000, 0.9)).toBeCloseTo(1216.6667, 4); // 10·25·8760/(0.9·2000), independent arithmetic
+    expect(anodeLife(1216.6667, 2000, 0.9, 10)).toBeCloseTo(25, 4);
+    expect(() => anodeMass(10, 25, 2, 0.9)).toThrow(/A·h\/kg/);
+  });
+  it('§6.4 coating breakdown fc = a + b·t (Table 10-4 category II, 0–30 m: a = 0.05, b = 0.025)', () => {
+    expect(coatingBreakdown(0.05, 0.025, 20, 'initial')).toBe(0.05);
+    expect(coatingBreakdown(0.05, 0.025, 20, 'mean')).toBeCloseTo(0.3, 12); // 0.05 + 0.025·20/2
+    expect(coatingBreakdown(0.05, 0.025, 20, 'final')).toBeCloseTo(0.55, 12);
+    // category I (a = 0.10, b = 0.10) over 20 y: final capped at 1, mean 1 − (1 − a)²/(2bt) (§6.4.5)
+    expect(coatingBreakdown(0.1, 0.1, 20, 'final')).toBe(1);
+    expect(coatingBreakdown(0.1, 0.1, 20, 'mean')).toBeCloseTo(1 - 0.81 / 4, 12);
+  });
+  it('§7.3 current demand and the mA/m² slip', () => {
+    expect(currentDemand(1000, 0.1, 0.3)).toBeCloseTo(30, 12);
+    expect(() => currentDemand(1000, 100, 0.3)).toThrow(/mA\/m²/);
+  });
+  // Table 10-7: no worked example could be read; the values are an independent evaluation of the formulas. The validity
+  // conditions (L ≥ 4r; ≥ 0.30 m stand-off, ×1.3 from 0.15 m; flush L ≥ 4·width and 4·thickness; S = mean of length and
+  // width) were read in 'Anode Resistance equations' (A. Abdelraouf, CP project notes 2021–22, pdfcoffee.com/anode-r-pdf-free.html).
+  it('Table 10-7 resistances and their validity conditions', () => {
+    expect(anodeResistance('long-standoff', 0.3, dims({ lengthM: 2, radiusM: 0.1 }))).toBeCloseTo(0.0807399, 6);
+    expect(anodeResistance('long-standoff', 0.3, dims({ lengthM: 2, radiusM: 0.1, standoffM: 0.2 }))).toBeCloseTo(0.0807399 * 1.3, 6);
+    expect(anodeResistance('short-standoff', 0.3, dims({ lengthM: 0.3, radiusM: 0.1 }))).toBeCloseTo(0.2617546, 6);
+    expect(anodeResistance('long-flush', 0.3, dims({ lengthM: 2, widthM: 0.2, thicknessM: 0.1 }))).toBeCloseTo(0.3 / 2.2, 12);
+    expect(anodeResistance('bracelet', 0.3, dims({ areaM2: 0.5 }))).toBeCloseTo(0.1336432, 6);
+    expect(() => anodeResistance('long-standoff', 0.3, dims({ lengthM: 0.3, radiusM: 0.1 }))).toThrow(/short-standoff/);
+    expect(() => anodeResistance('short-standoff', 0.3, dims({ lengthM: 2, radiusM: 0.1 }))).toThrow(/long-standoff/);
+    expect(() => anodeResistance('long-flush', 0.3, dims({ lengthM: 0.5, widthM: 0.2, thicknessM: 0.1 }))).toThrow(/bracelet/);
+    expect(() => anodeResistance('long-standoff', 0.3, dims({ lengthM: 2, radiusM: 0.1, standoffM: 0.1 }))).toThrow(/0.15 m/);
+  });
+  it('long-standoff and short-standoff meet near L = 4r (the formulas describe the same anode there)', () => {
+    const a = anodeResistance('long-standoff', 1, dims({ lengthM: 0.4, radiusM: 0.1 }));
+    const b = anodeResistance('short-standoff', 1, dims({ lengthM: 0.3999, radiusM: 0.1 }));
+    expect(Math.abs(a - b) / a).toBeLessThan(0.1);
+  });
+  it('§7.7 output, §7.8 number of anodes', () => {
+    expect(anodeOutput(-0.8, -1.05, 0.125)).toBeCloseTo(2, 12);
+    expect(() => anodeOutput(-0.8, -0.7, 0.1)).toThrow(/driving voltage/);
+    expect(() => anodeOutput(-800, -1.05, 0.1)).toThrow(/millivolts/);
+    expect(anodeCount(30, 2, null, null)).toBe(15);
+    expect(anodeCount(31, 2, null, null)).toBe(16);
+    expect(anodeCount(30, 2, 1216.67, 50)).toBe(25);
+  });
+  it('anode data table (DNV-RP-B401 Table 10-6 as transcribed; Roberge 2008 p. 555)', () => {
+    expect(anodeData('Al-Zn-In', 'capacity')).toBe(2000);
+    expect(anodeData('Al-Zn-In/seawater', 'potential')).toBe(-1.05);
+    expect(anodeData('zinc', 'capacity')).toBe(780);
+    expect(anodeData('Mg', 'scale')).toBe('CSE');
+    expect(() => anodeData('Cd', 'capacity')).toThrow(NotFoundError);
+  });
+});
+
+describe('impressed current', () => {
+  it('Dwight vertical rod, buried horizontal wire, anodes in parallel (independent evaluation)', () => {
+    // Dwight (1936): ρ/(2πL)(ln(8L/d) − 1) — from memory; 30 Ω·m, L = 2 m, d = 0.1 m
+    expect(groundbedResistance('vertical', 30, 2, 0.1, 1, null, null)).toBeCloseTo(9.72876, 4);
+    // Dwight buried wire, total length 10 m at 1.5 m, d = 0.1 m; same form as lopesivan/matlab-eng rnHorizontais.py condutorUnico
+    expect(groundbedResistance('horizontal', 30, 10, 0.1, 1, null, 1.5)).toBeCloseTo(2.94421, 4);
+    // parallel-anode formula (after Sunde), 5 anodes 2 m long at 6 m — from memory
+    expect(groundbedResistance('parallel', 30, 2, 0.1, 5, 6, null)).toBeCloseTo(2.32385, 4);
+    expect(() => groundbedResistance('parallel', 30, 2, 0.1, 5, 1, null)).toThrow(/spacing/);
+  });
+  it('rectifier voltage with back EMF and cable drop', () => {
+    expect(rectifierVoltage(10, 1.5, 2)).toBe(17);
+    expect(cableDrop(10, 200, 1.15)).toBeCloseTo(2.3, 12);
+  });
+});
+
+describe('environment', () => {
+  it('Wenner 2πaR (ASTM G57) and the layer method gives a homogeneous soil back', () => {
+    expect(wennerResistivity(3, 5)).toBeCloseTo(30 * Math.PI, 12);
+    const rho = 50;
+    const R = (a: number) => rho / (2 * Math.PI * a);
+    expect(layerResistivity(1.5, R(1.5), 3, R(3))).toBeCloseTo(rho, 9);
+    expect(layerResistivity(1.5, 10, 3, 4)).toBeCloseTo(62.8319, 4);
+    expect(() => layerResistivity(1.5, 4, 3, 10)).toThrow(InputError);
+  });
+  it('PSS-78: UNESCO 1983 check value S = 40.0000 at R = 1.888091, t = 40 °C, p = 10000 dbar', () => {
+    // pressure term of PSS-78 (UNESCO 1983 eq. 2; coefficients read in GSW sources), Rt = R/(Rp·rt)
+    const R = 1.888091;
+    const t = 40;
+    const p = 10000;
+    const e = [2.07e-5, -6.37e-10, 3.989e-15];
+    const d = [3.426e-2, 4.464e-4, 4.215e-1, -3.107e-3];
+    const Rp = 1 + (p * (e[0] + e[1] * p + e[2] * p * p)) / (1 + d[0] * t + d[1] * t * t + (d[2] + d[3] * t) * R);
+    const rt = 0.6766097 + t * (2.00564e-2 + t * (1.104259e-4 + t * (-6.9698e-7 + t * 1.0031e-9)));
+    expect(salinityFromRatio(R / (Rp * rt), t)).toBeCloseTo(40, 4);
+  });
+  it('seawater S = 35 at 15 °C: C = 42.914 mS/cm, ρ = 0.2330 Ω·m (UNESCO 1983 definition)', () => {
+    expect(seawaterResistivity(35, 15)).toBeCloseTo(1 / 4.2914, 4);
+    // colder and fresher seawater is more resistive
+    expect(seawaterResistivity(35, 5)).toBeGreaterThan(seawaterResistivity(35, 15));
+    expect(seawaterResistivity(30, 15)).toBeGreaterThan(seawaterResistivity(35, 15));
+    expect(() => seawaterResistivity(0.5, 15)).toThrow(/PSS-78/);
+  });
+});
