@@ -1,12 +1,15 @@
 /* Build: dist/functions.js (self-contained), dist/functions.json (generated from JSDoc),
  * dist/taskpane.html + dist/taskpane.js (one shared runtime: the page loads both bundles),
- * dist/manifest.xml and the icons. */
+ * dist/manifest.xml, the icons and the function reference (docs/functions.html, the help links' target).
+ * CELLWRIGHT_BASE_URL=https://host/path/ builds for that place instead of https://localhost:3000/
+ * (scripts/lib/deployBase.cjs). */
 const path = require('path');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
 const fs = require('fs');
 const { ProvidePlugin } = require('webpack');
+const { DeployBasePlugin, deployBase } = require('./scripts/lib/deployBase.cjs');
 
 // Built-ins bound once per bundle instead of looked up on the global object at every use (see
 // functions/intrinsics.ts: in node:vm, where the tests and the benchmark load the bundle, each
@@ -23,9 +26,14 @@ const declarations = fs
 
 module.exports = (env, argv) => {
   const production = argv.mode !== 'development';
+  // Where dist/ will be served from: https://localhost:3000/ unless CELLWRIGHT_BASE_URL says otherwise.
+  const base = deployBase(process.env.CELLWRIGHT_BASE_URL);
   return {
     mode: production ? 'production' : 'development',
     devtool: production ? false : 'source-map',
+    // Persistent cache (node_modules/.cache/webpack): a second build with unchanged sources, such as the
+    // deployable build the tests make after npm test's own, reuses the compiled and minified modules.
+    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs')] } },
     target: ['web', 'es2020'],
     entry: {
       functions: ['./functions/entry.ts', ...declarations],
@@ -58,8 +66,10 @@ module.exports = (env, argv) => {
           { from: 'manifest.xml', to: 'manifest.xml' },
           { from: 'assets/*.png', to: '[name][ext]' },
           { from: 'taskpane/taskpane.css', to: 'taskpane.css' },
+          { from: 'docs/functions.html', to: 'docs/functions.html' },
         ],
       }),
+      new DeployBasePlugin(base),
     ],
     devServer: {
       host: 'localhost',

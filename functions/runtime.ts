@@ -13,10 +13,15 @@
  *  4. if Excel has not answered within START_TIMEOUT_MS the functions answer #N/A ("did not answer")
  *     rather than wait for ever; when the answer comes later it is used and the workbook recalculated;
  *  5. when the stored table changes elsewhere (a co-author, another pane), the new one is read, used
- *     and the workbook recalculated.
+ *     and the workbook recalculated;
+ *  6. once the table in use is known, it is compared with the one the workbook's results were last
+ *     computed with (settings key cellwright.computedWith, written at every recalculation Cellwright
+ *     asks for); when they differ, or nothing is recorded, the workbook is recalculated once (full) and
+ *     the table recorded, so results saved under another table (an older built-in one, a table edited
+ *     elsewhere) do not stay in the cells silently.
  */
-import { installFunctionsHost, isCurrent, lastStoredValue, startTableLoad, useStoredValue } from './workbookHost';
-import { TABLE_SETTING_KEY, readStoredValue, recalculateAll, sameStoredValue } from './workbookStore';
+import { hostStatus, installFunctionsHost, isCurrent, lastStoredValue, startTableLoad, useStoredValue } from './workbookHost';
+import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll, sameStoredValue } from './workbookStore';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
 export const START_TIMEOUT_MS = 60_000;
@@ -58,8 +63,14 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
 
 async function useIfChanged(value: unknown): Promise<void> {
   if (sameStoredValue(value, lastStoredValue())) return;
-  useStoredValue(value);
-  await recalculateAll();
+  await recalculateAll(computedWithOf(useStoredValue(value)));
+}
+
+/** Recalculates once when the workbook's results were computed with another table than the one in use. */
+async function recalculateIfStale(): Promise<void> {
+  const now = computedWithOf(hostStatus());
+  if (now === undefined || (await readComputedWith()) === now) return;
+  await recalculateAll(now);
 }
 
 async function watchForChanges(): Promise<void> {
@@ -84,8 +95,9 @@ function start(): void {
       await load.done;
       // The answer came after the time-out: use it now, unless the pane has set a table since.
       if (isCurrent(load.generation) && lastStoredValue() === undefined) {
-        useStoredValue(value);
-        await recalculateAll();
+        await recalculateAll(computedWithOf(useStoredValue(value)));
+      } else if (inExcel) {
+        await recalculateIfStale();
       }
       if (inExcel) await watchForChanges();
     },

@@ -19,6 +19,30 @@ import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } 
 
 /** The settings key of the stored table. */
 export const TABLE_SETTING_KEY = 'cellwright.potentialTable';
+/**
+ * The settings key that records which table the workbook's results were last computed with: the
+ * checksum of the table in use when Cellwright last recalculated the workbook ("unreadable" when the
+ * functions answered #N/A for an unreadable table). At start-up the functions runtime compares it with
+ * the table in use and recalculates once when they differ (functions/runtime.ts).
+ */
+export const COMPUTED_WITH_KEY = 'cellwright.computedWith';
+
+/** What to record under COMPUTED_WITH_KEY for the functions' status (undefined while still loading). */
+export function computedWithOf(status: { readonly state: string; readonly checksum?: string } | undefined): string | undefined {
+  if (status === undefined || status.state === 'loading') return undefined;
+  if (status.state === 'unreadable') return 'unreadable';
+  return status.checksum;
+}
+
+/** Reads what COMPUTED_WITH_KEY holds (null when nothing is recorded). */
+export async function readComputedWith(): Promise<string | null> {
+  return Excel.run(async (context) => {
+    const item = context.workbook.settings.getItemOrNullObject(COMPUTED_WITH_KEY);
+    item.load('value');
+    await context.sync();
+    return item.isNullObject || typeof item.value !== 'string' ? null : item.value;
+  });
+}
 
 /** What the workbook holds. `raw` is the stored value exactly as read (for conflict checks and export). */
 export type StoredState =
@@ -110,11 +134,20 @@ async function replaceValue(seen: unknown, next: string | null, builtin: Version
 /**
  * Recalculates every formula in every open workbook, so each cell that uses the table shows the table
  * now in use: `application.calculate(Excel.CalculationType.full)` (ExcelApi 1.1). It costs one full
- * recalculation, the same as Ctrl+Alt+F9 (see README and DEVELOPERS.md).
+ * recalculation, the same as Ctrl+Alt+F9 (see README and DEVELOPERS.md). Then records `computedWith`
+ * (see COMPUTED_WITH_KEY) when given; a workbook that cannot take the record (read-only) is only
+ * recalculated again next time.
  */
-export async function recalculateAll(): Promise<void> {
+export async function recalculateAll(computedWith?: string): Promise<void> {
   await Excel.run(async (context) => {
     context.workbook.application.calculate(Excel.CalculationType.full);
     await context.sync();
+    if (computedWith === undefined) return;
+    try {
+      context.workbook.settings.add(COMPUTED_WITH_KEY, computedWith);
+      await context.sync();
+    } catch (e) {
+      console.warn(`Cellwright: recording ${COMPUTED_WITH_KEY} failed`, e);
+    }
   });
 }

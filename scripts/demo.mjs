@@ -261,13 +261,13 @@ function writeCover(wb, bundleInfo) {
 /* ---------------------------------------------------------------------------------------- */
 
 async function main() {
-  const buildNote = argv.includes('--no-build') ? 'dist/ used as it is: --no-build' : ensureBuilt({ quiet: QUIET });
+  const buildNote = argv.includes('--no-build') ? 'dist/ was used as it is (--no-build).' : ensureBuilt({ quiet: QUIET });
   const afterBuild = process.hrtime.bigint();
   const buildSeconds = Number(afterBuild - started) / 1e9;
   const bundle = loadBundle();
   const version = JSON.parse(readFileSync(resolve(ROOT, 'package.json'), 'utf8')).version;
   out(bold(scenario.title));
-  out(dim(`Functions bundle: dist/functions.js, ${bundle.metadata.functions.length} functions, loaded with only a CustomFunctions global (${buildNote}).`));
+  out(dim(`Functions bundle: dist/functions.js, ${bundle.metadata.functions.length} functions, loaded with only a CustomFunctions global. ${buildNote}`));
   out(dim('Every name in this scenario is invented; inputs are invented, results come from the bundle.'));
 
   const wb = new ExcelJS.Workbook();

@@ -1,8 +1,11 @@
 // npm start: build, make localhost certificates (no system-store install unless asked with
 // --install-ca), serve dist/ over https on localhost:3000 with office.js from the installed
-// @microsoft/office-js package, and print how to sideload the manifest into Excel.
+// @microsoft/office-js package, and print how to sideload the manifest into Excel. "Ready" and the
+// sideload steps are printed only once webpack's first build has succeeded and the server has
+// answered a request for the manifest.
 import { createRequire } from 'node:module';
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { get } from 'node:https';
 import { resolve, dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -38,11 +41,49 @@ const devServerOptions = {
   ],
 };
 const server = new WebpackDevServer(devServerOptions, compiler);
+
+// Resolves after the first build without errors (a failed build is reported and the next one awaited:
+// the server keeps watching the sources).
+const built = new Promise((resolveBuilt) => {
+  let done = false;
+  compiler.hooks.done.tap('cellwright-start', (stats) => {
+    if (done) return;
+    if (stats.hasErrors()) {
+      console.error(stats.toString({ all: false, errors: true, colors: false }));
+      console.error('\nThe build failed; fix the errors above (the server rebuilds on every change).');
+      return;
+    }
+    done = true;
+    resolveBuilt();
+  });
+});
+
+/** Asks the server for a file, trusting the development CA; resolves with the status code. */
+function probe(path) {
+  return new Promise((resolveProbe, reject) => {
+    const req = get({ host: 'localhost', port: devServerOptions.port, path, ca: readFileSync(ca) }, (res) => {
+      res.resume();
+      resolveProbe(res.statusCode);
+    });
+    req.on('error', reject);
+    req.setTimeout(10_000, () => req.destroy(new Error('no answer within 10 s')));
+  });
+}
+
+console.log('Building and starting the server on https://localhost:3000 …');
 await server.start();
+await built;
+const status = await probe('/manifest.xml');
+if (status !== 200) {
+  console.error(`The server answered ${status} for /manifest.xml; it is not ready. Stop it with Ctrl+C.`);
+  process.exitCode = 1;
+  await server.stop();
+  process.exit();
+}
 
 const manifest = resolve(root, 'manifest.xml');
 console.log(`
-Cellwright is served at https://localhost:3000 (bound to localhost only).
+Cellwright is ready at https://localhost:3000 (bound to localhost only).
 
 Manifest: ${manifest}
 

@@ -15,7 +15,7 @@ import { type RowDifference, describeDifference, diffTables } from '../src/store
 import { type TableRecords, type VersionedRecords, cleanRecord, matchKey, rowsOf, sameRecord } from '../src/store/rows';
 import { builtinChecksum } from '../src/store/stored';
 import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../functions/workbookHost';
-import { type StoredState, type WriteOutcome, readStoredValue, interpret, recalculateAll, removeTable, sameStoredValue, writeCopy } from '../functions/workbookStore';
+import { type StoredState, type WriteOutcome, computedWithOf, readStoredValue, interpret, recalculateAll, removeTable, sameStoredValue, writeCopy } from '../functions/workbookStore';
 
 export interface ModelDeps {
   readonly builtin: VersionedRecords;
@@ -126,6 +126,8 @@ export class TableModel {
   private async syncFunctions(force: boolean): Promise<string | undefined> {
     const host = this.deps.host();
     let warning: string | undefined;
+    /** The table the functions answer from after this, recorded with the recalculation. */
+    let computedWith: string | undefined;
     if (host === undefined) {
       warning = 'The worksheet functions do not run in this pane’s page, so they were not told; they read the table when the workbook is next opened.';
       // Only a change is worth a recalculation (for functions running elsewhere); opening the pane is not.
@@ -137,12 +139,12 @@ export class TableModel {
         (this.state.kind === 'readable' && st.state === 'workbook' && st.checksum === this.state.read.checksum && st.revision === this.state.read.copy.revision) ||
         (this.state.kind === 'unreadable' && st.state === 'unreadable');
       if (same && !force) return undefined;
-      host.useStoredValue(this.state.raw);
+      computedWith = computedWithOf(host.useStoredValue(this.state.raw));
       // Still reading at start-up: the cells are waiting and will get this table; nothing to recalculate.
       if (st.state === 'loading' && !force) return undefined;
     }
     try {
-      await recalculateAll();
+      await recalculateAll(computedWith);
     } catch (e) {
       warning = `${warning ?? ''} Recalculation failed (${e instanceof Error ? e.message : String(e)}); press Ctrl+Alt+F9 in Excel to recalculate.`.trim();
     }

@@ -19,13 +19,14 @@ import { type Child, append, byId, clear, h, replace } from './dom';
 import { type CoupleFields, type ElectrodeFields, checkCoupleForm, checkElectrodeForm } from './forms';
 import { type ActionResult, TableModel } from './model';
 import { copyToSheet } from './sheet';
+import { pollWhileVisible } from './visiblePolling';
 
 const builtin = recordsOf(builtinTable());
 const model = new TableModel({ builtin, host: () => globalThis.cellwrightFunctionsHost });
 
 /** Rows shown at most in a list (a filter narrows the rest). */
 const MAX_SHOWN = 200;
-/** How often the pane looks for changes made elsewhere (another pane, a co-author). */
+/** How often the pane looks for changes made elsewhere (another pane, a co-author), while it is visible. */
 const CHECK_EVERY_MS = 20_000;
 
 const KINDS: readonly RowKind[] = ['couple', 'electrode'];
@@ -915,8 +916,7 @@ function start(): void {
     }
     await reload();
     if (ui.ready) {
-      setInterval(() => void checkElsewhere(), CHECK_EVERY_MS);
-      window.addEventListener('focus', () => void checkElsewhere());
+      pollWhileVisible(() => void checkElsewhere(), CHECK_EVERY_MS);
     }
   });
 }

@@ -54,7 +54,7 @@ function newestSource(dirs) {
 
 /**
  * Builds dist/ with the production build when it is missing or older than the sources
- * (src/, functions/, data/). Returns a line describing what was done, for the caller to print.
+ * (src/, functions/, data/). Returns one plain sentence saying what was done, for the caller to print.
  * A failed rebuild over an existing dist/ keeps the old bundle and says so; a failed first build
  * throws.
  */
@@ -63,18 +63,18 @@ export function ensureBuilt({ quiet = false } = {}) {
   const json = resolve(DIST, 'functions.json');
   const present = existsSync(js) && existsSync(json);
   const stale = present && newestSource(['src', 'functions', 'data']) > Math.min(statSync(js).mtimeMs, statSync(json).mtimeMs);
-  if (present && !stale) return 'using the existing production build in dist/';
+  if (present && !stale) return 'The existing production build in dist/ was used.';
   const why = present ? 'dist/ is older than the sources' : 'dist/ has no functions bundle yet';
-  if (!quiet) process.stderr.write(`Building the functions bundle (${why}) …\n`);
+  if (!quiet) process.stderr.write(`Building the functions bundle: ${why} …\n`);
   const webpackCli = resolve(ROOT, 'node_modules/webpack-cli/bin/cli.js');
   const r = spawnSync(process.execPath, [webpackCli, '--mode', 'production'], { cwd: ROOT, encoding: 'utf8' });
   const ok = r.status === 0 && existsSync(js) && existsSync(json);
   if (!ok) {
     const tail = `${r.stdout ?? ''}${r.stderr ?? ''}`.trim().split('\n').slice(-15).join('\n');
     if (!present) throw new Error(`the production build failed, so there is no bundle to run:\n${tail}`);
-    return `the rebuild failed (${tail.split('\n').pop()}); using the previous build in dist/`;
+    return `The rebuild failed (${tail.split('\n').pop()}), so the previous build in dist/ was used.`;
   }
-  return `built dist/ (${why})`;
+  return present ? 'dist/ was older than the sources, so it was rebuilt.' : 'dist/ had no functions bundle yet, so it was built.';
 }
 
 /**

@@ -18,6 +18,7 @@ const couplesFile = JSON.parse(readFileSync(resolve(root, 'data/couples.json'), 
 const BUILTIN_VERSION = couplesFile.version;
 const builtinE0 = (key) => couplesFile.couples.find((c) => c.key === key).e0;
 const KEY = 'cellwright.potentialTable';
+const COMPUTED_WITH_KEY = 'cellwright.computedWith';
 
 /* ------------------------------------------------------------------------------------------------ */
 /* Helpers                                                                                          */
@@ -26,6 +27,9 @@ const KEY = 'cellwright.potentialTable';
 async function ready(page) {
   await page.waitForFunction(() => document.getElementById('app')?.getAttribute('aria-busy') === 'false');
   await page.waitForFunction(() => !/Reading the workbook/.test(document.getElementById('in-use-body')?.textContent ?? ''));
+  // The functions' start-up has finished: it records the table the results are computed with (after
+  // recalculating once when that differs from the record, as on a workbook's first opening).
+  await page.waitForFunction((k) => window.__stubWorkbook.file().settings[k] !== undefined, COMPUTED_WITH_KEY);
 }
 
 async function openPane(open) {
@@ -138,6 +142,12 @@ export const tests = [
       assert.match(inUse, /no table of its own/);
       assert.match(inUse, /Worksheet functions: use the built-in table/);
       assert.equal(await stored(page), null);
+      // First opening: nothing recorded, so the functions recalculated once and recorded the table in use.
+      assert.deepEqual(await calculations(page), ['Full']);
+      const recorded = await page.evaluate((k) => window.__stubWorkbook.file().settings[k], COMPUTED_WITH_KEY);
+      assert.ok(inUse.includes(`Checksum ${recorded}`), `recorded ${recorded}`);
+      await reopen(page);
+      assert.deepEqual(await calculations(page), ['Full']); // reopened with the same table: no recalculation
       assert.match(await text(page, '#count-couple'), new RegExp(`^${couplesFile.couples.length} couples`));
       assert.equal(await cellE0(page, 'Cu2+/Cu'), builtinE0('Cu2+/Cu'));
       assert.match(await text(page, '.app-footer'), /H2.*Cl2.*HCN.*cyanide.*chromium\(VI\).*local codes/);
@@ -199,7 +209,8 @@ export const tests = [
       assert.equal(doc.revision, 1);
       assert.deepEqual(doc.own.couples, ['Tl+/Tl']);
       assert.equal(await cellE0(page, 'Tl+/Tl'), -0.336);
-      assert.deepEqual(await calculations(page), ['Full']);
+      // One at the first opening (nothing recorded yet), one for the change.
+      assert.deepEqual(await calculations(page), ['Full', 'Full']);
       const r = row(page, 'couple', 'Tl+/Tl');
       assert.match(await r.innerText(), /−0\.336 V[\s\S]*n = 1[\s\S]*Added in this workbook/);
       // Focus is on the new row's Edit button.
@@ -304,7 +315,7 @@ export const tests = [
       await waitIdle(page);
       assert.equal(await cellE0(page, 'Ag+/Ag'), builtinE0('Ag+/Ag'));
       assert.match(await text(page, '#in-use'), /Differ from built-in none/);
-      assert.equal((await calculations(page)).length, 4);
+      assert.equal((await calculations(page)).length, 5); // the first opening's and one per change
     },
   },
 
@@ -325,7 +336,7 @@ export const tests = [
       assert.equal(await stored(page), null);
       assert.match(await text(page, '#in-use'), /Built-in table/);
       assert.equal((await cellE0(page, 'Tl+/Tl')).error, '#N/A');
-      assert.deepEqual(await calculations(page), ['Full', 'Full']);
+      assert.deepEqual(await calculations(page), ['Full', 'Full', 'Full']); // the first opening's, the add, the reset
     },
   },
 

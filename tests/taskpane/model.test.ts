@@ -8,7 +8,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { STDPOTENTIAL } from '../../functions/families/table';
 import { installFunctionsHost, useStoredValue } from '../../functions/workbookHost';
-import { TABLE_SETTING_KEY } from '../../functions/workbookStore';
+import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../functions/workbookStore';
 import { exportCsv, importCsv } from '../../src/store/csv';
 import { type VersionedRecords } from '../../src/store/rows';
 import { contentChecksum, forgetLastRead, writeSchema1Text, writeStoredText } from '../../src/store/stored';
@@ -62,6 +62,9 @@ describe('round trip', () => {
 
     const stored = file.settings.get(TABLE_SETTING_KEY) as string;
     expect(JSON.parse(stored)).toMatchObject({ schema: 2, revision: 1, basedOn: B.version, changedAt: '2026-03-04T05:06:07.000Z' });
+    // The recalculation records the table the results are now computed with (checked at the next start-up).
+    expect(file.settings.get(COMPUTED_WITH_KEY)).toBe(a.checksum);
+    expect(a.checksum).toMatch(/^sha256:[0-9a-f]{64}$/);
 
     // "Close and reopen": a new pane on the same workbook file, functions restarted from the built-in table.
     useStoredValue(null);

@@ -7,7 +7,7 @@
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { TABLE_SETTING_KEY } from '../../functions/workbookStore';
+import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../functions/workbookStore';
 import { applyChange, pinnedCopy } from '../../src/store/copy';
 import { writeStoredText } from '../../src/store/stored';
 import { loadBundle } from '../bundle/harness';
@@ -38,6 +38,11 @@ async function startRuntime(): Promise<Started> {
   return { STDPOTENTIAL: table.STDPOTENTIAL as unknown as Fn, context };
 }
 
+/** The checksum a stored text carries (what the functions report and record for it). */
+function checksumOf(stored: string): string {
+  return (JSON.parse(stored) as { checksum: string }).checksum;
+}
+
 async function cell(STDPOTENTIAL: Fn, key: string): Promise<unknown> {
   const r = STDPOTENTIAL([[key]], null);
   expect(r).toBeDefined();
@@ -65,7 +70,8 @@ describe('functions runtime start-up', () => {
   });
 
   it('in Excel, look-ups wait for the workbook table and answer from it (never from the built-in table first)', async () => {
-    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35) });
+    // The workbook's results were last computed with this very table (recorded), so nothing is recalculated.
+    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35)) });
     let open!: () => void;
     file.gate = new Promise<void>((r) => (open = r));
     g.Office = officeFor('Excel');
@@ -80,7 +86,8 @@ describe('functions runtime start-up', () => {
     const st = globalThis.cellwrightFunctionsHost!.status();
     expect(st).toMatchObject({ state: 'workbook', revision: 1, version: B.version });
     expect(st.checksum).toMatch(/^sha256:[0-9a-f]{64}$/);
-    expect(file.calculations).toEqual([]); // nothing to recalculate: no cell answered before
+    await vi.waitFor(() => expect(file.settingsChangedHandlers.length).toBe(1)); // start-up has finished
+    expect(file.calculations).toEqual([]); // nothing to recalculate: no cell answered before, results current
   });
 
   it('a workbook without a table of its own uses the built-in table', async () => {
@@ -164,7 +171,7 @@ describe('functions runtime start-up', () => {
   });
 
   it('a table changed elsewhere (settings changed event) is read, used and recalculated', async () => {
-    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35, 1) });
+    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35, 1), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35, 1)) });
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
     const { STDPOTENTIAL } = await startRuntime();
@@ -175,8 +182,64 @@ describe('functions runtime start-up', () => {
     await file.settingsChangedHandlers[0]({ type: 'SettingsChanged' });
     expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(0.37);
     expect(file.calculations).toEqual(['Full']);
+    expect(file.settings.get(COMPUTED_WITH_KEY)).toBe(checksumOf(storedWithCu(0.37, 2)));
     // The same value again (e.g. the event for this runtime's own write): nothing to do.
     await file.settingsChangedHandlers[0]({ type: 'SettingsChanged' });
+    expect(file.calculations).toEqual(['Full']);
+  });
+});
+
+describe('recalculation on open: results computed with another table are recalculated once', () => {
+  /** Starts the runtime on `file` and waits until start-up has finished (it then watches for changes). */
+  async function open(file: WorkbookFile) {
+    g.Office = officeFor('Excel');
+    g.Excel = excelFor(file);
+    const started = await startRuntime();
+    await vi.waitFor(() => expect(file.settingsChangedHandlers.length).toBeGreaterThan(0));
+    return started;
+  }
+
+  it('nothing recorded (saved before the record existed): one full recalculation, and the table in use recorded', async () => {
+    const file = new WorkbookFile();
+    await open(file);
+    expect(file.calculations).toEqual(['Full']);
+    const inUse = globalThis.cellwrightFunctionsHost!.status();
+    expect(inUse.state).toBe('builtin');
+    expect(file.settings.get(COMPUTED_WITH_KEY)).toBe(inUse.checksum);
+    // Opened again with the same add-in: the record matches, nothing is recalculated.
+    file.settingsChangedHandlers.length = 0;
+    await open(file);
+    expect(file.calculations).toEqual(['Full']);
+  });
+
+  it('results computed with an older built-in table: recalculated once with the table in use, which is then recorded', async () => {
+    // A checksum the add-in's table does not have, standing for the table of an earlier release.
+    const older = `sha256:${'0'.repeat(64)}`;
+    const file = new WorkbookFile({ [COMPUTED_WITH_KEY]: older });
+    const { STDPOTENTIAL } = await open(file);
+    expect(file.calculations).toEqual(['Full']);
+    expect(file.settings.get(COMPUTED_WITH_KEY)).not.toBe(older);
+    expect(file.settings.get(COMPUTED_WITH_KEY)).toBe(globalThis.cellwrightFunctionsHost!.status().checksum);
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(cuBuiltin);
+  });
+
+  it("the workbook's own table edited elsewhere since the last recalculation: recalculated once", async () => {
+    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.36, 2), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35, 1)) });
+    const { STDPOTENTIAL } = await open(file);
+    expect(file.calculations).toEqual(['Full']);
+    expect(file.settings.get(COMPUTED_WITH_KEY)).toBe(checksumOf(storedWithCu(0.36, 2)));
+    expect(await cell(STDPOTENTIAL, 'Cu2+/Cu')).toBe(0.36);
+  });
+
+  it('a table that has become unreadable: recalculated once so the cells show #N/A, and "unreadable" recorded', async () => {
+    const damaged = storedWithCu(0.35).replace('"e0":0.35', '"e0":0.36');
+    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: damaged, [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35)) });
+    await open(file);
+    expect(file.calculations).toEqual(['Full']);
+    expect(file.settings.get(COMPUTED_WITH_KEY)).toBe('unreadable');
+    expect(file.settings.get(TABLE_SETTING_KEY)).toBe(damaged); // never written over
+    file.settingsChangedHandlers.length = 0;
+    await open(file);
     expect(file.calculations).toEqual(['Full']);
   });
 });
