@@ -47,6 +47,7 @@ function formatValue(v) {
   if (typeof v === 'string') return `"${v}"`;
   if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   if (typeof v === 'number') return formatNumber(v);
+  if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   return String(v);
 }
 
