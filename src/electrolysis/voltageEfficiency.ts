@@ -1,4 +1,4 @@
-import { InputError } from '../errors';
+import { DomainError, InputError, finite } from '../errors';
 import { heatingValueVoltage } from './heatingValueVoltage';
 
 /** Text that is a plain number. */
@@ -23,6 +23,7 @@ export function voltageEfficiency(cellVoltageV: number, basis: string | number):
   if (typeof basis === 'number') ref = basis;
   else if (NUMBER.test(basis.trim())) ref = Number(basis.trim());
   else ref = heatingValueVoltage(basis);
+  if (!Number.isFinite(ref)) throw new DomainError('the reference voltage is outside the range of double-precision numbers');
   if (!(ref > 0)) throw new InputError(`the reference voltage must be > 0 V (a decomposition voltage is positive); got ${ref}`);
-  return ref / cellVoltageV;
+  return finite(ref / cellVoltageV, 'the efficiency');
 }
