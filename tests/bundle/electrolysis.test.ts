@@ -77,7 +77,7 @@ describe('CELLVOLTAGE', () => {
     expect(r[0][1]).toBeCloseTo((b80 / 1.5) * Math.log(3000 / 1e-3), 9); // Tafel equation, Bard & Faulkner eq. 3.4.12
   });
   it('a column of current densities gives one row each, under one header', async () => {
-    const a = args.slice();
+    const a: unknown[] = args.slice();
     a[1] = [[1000], [2000], [3000]];
     const r = await call('CELLVOLTAGE', ...a, true);
     expect(r).toHaveLength(4);
@@ -85,7 +85,7 @@ describe('CELLVOLTAGE', () => {
     expect((r[1][6] as number) < (r[2][6] as number)).toBe(true);
   });
   it('a current at the cathode limiting current is #VALUE! across the row; a header range is #VALUE!', async () => {
-    const a = args.slice();
+    const a: unknown[] = args.slice();
     a[12] = 3000;
     const r = await call('CELLVOLTAGE', ...a, null);
     expect(r[0].every((x) => isError(x, '#VALUE!'))).toBe(true);
