@@ -258,6 +258,8 @@ export const scenario = {
         { label: 'The same gas saturated with water vapour', formula: '={cells}*CELLWRIGHT.GASVOLUME({I},{hours},2,{eta},{T},1.2,TRUE)/1000', unit: 'm³', digits: 2, note: 'what a wet-gas meter at the separator sees' },
         { label: 'Water vapour pressure at the lye temperature', formula: '=CELLWRIGHT.WATERVAPOR({T})', unit: 'bar', digits: 4, note: 'pure water (IAPWS-IF97); over KOH lye it is lower' },
         { key: 'h2flow', label: 'Hydrogen output', formula: '=CELLWRIGHT.GASFLOW({I},2,{eta},{cells})', unit: 'Nm³/h', digits: 3, note: 'dry, 0 °C and 101.325 kPa' },
+        { key: 'meter', label: 'Metered dry hydrogen (invented log)', value: 2.05, unit: 'Nm³/h' },
+        { label: 'Faradaic efficiency from the meter', formula: '=CELLWRIGHT.GASEFFICIENCY({meter},{I},2,{cells})', unit: 'fraction', digits: 3, note: 'against the gas-analysis figure above' },
         { label: 'Hydrogen output at 15 °C (ISO 13443 reference)', formula: '=CELLWRIGHT.GASFLOW({I},2,{eta},{cells},"15C")', unit: 'm³/h', digits: 3 },
         { label: 'DC energy per normal m³ of hydrogen', formula: '=CELLWRIGHT.GASENERGY({Ucell},2,{eta})', unit: 'kWh/Nm³', digits: 2 },
         { key: 'mH2', label: 'Hydrogen mass', formula: '={cells}*CELLWRIGHT.DEPOSITMASS({I},{hours},"H2",2,{eta})/1000', unit: 'kg', digits: 3 },

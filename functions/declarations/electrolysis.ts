@@ -187,6 +187,21 @@ function cellsForGas(flow_Nm3_h: any[][], current_A: any[][], n: any[][], effici
 }
 
 /**
+ * Faradaic efficiency from a metered dry gas flow: measured normal m³/h over what the current makes at 100 %. Above 105 % the answer is #VALUE! asking to check the meter's reference conditions, dryness, the current and the cell count.
+ * @customfunction GASEFFICIENCY
+ * @helpurl https://localhost:3000/docs/functions.html#gasefficiency
+ * @param flow_Nm3_h Metered dry flow, in normal m³/h at the same reference.
+ * @param current_A Current through the cells, in A.
+ * @param n Electrons per gas molecule (2 for H2 and Cl2, 4 for O2).
+ * @param [cells] Cells in series (default 1).
+ * @param [reference] Reference of the normal m³: "0C" (default), "15C" or "20C".
+ * @returns Efficiency as a fraction.
+ */
+function gasEfficiency(flow_Nm3_h: any[][], current_A: any[][], n: any[][], cells?: any[][], reference?: any[][]): any[][] {
+  return F.GASEFFICIENCY(flow_Nm3_h, current_A, n, cells, reference) as any;
+}
+
+/**
  * Hydrogen in an air sweep (cell hood, vent): its volume fraction in the mixture and that fraction as a share of the lower flammability limit (4.0 vol % in air, Zabetakis, US Bureau of Mines Bulletin 627, 1965). A screening figure: ventilation design follows the applicable standards and codes.
  * @customfunction H2INAIR
  * @helpurl https://localhost:3000/docs/functions.html#h2inair

@@ -11,6 +11,7 @@ import { currentForGasFlow } from '../../src/electrolysis/currentForGasFlow';
 import { decompositionVoltage } from '../../src/electrolysis/decompositionVoltage';
 import { electrolyteConductivity } from '../../src/electrolysis/electrolyteConductivity';
 import { energyPerNormalVolume } from '../../src/electrolysis/energyPerNormalVolume';
+import { gasFlowEfficiency } from '../../src/electrolysis/gasFlowEfficiency';
 import { hydrogenInAir } from '../../src/electrolysis/hydrogenInAir';
 import { normalGasFlow } from '../../src/electrolysis/normalGasFlow';
 import { ohmicDrop } from '../../src/electrolysis/ohmicDrop';
@@ -184,6 +185,12 @@ export const CELLSFORGAS = worksheet({
   id: 'CELLSFORGAS',
   args: [num('flow_Nm3_h', domains.nonNegative, 'Nm³/h'), num('current_A', domains.positive, 'A'), electrons, efficiency, reference],
   compute: cellsForGasFlow,
+});
+
+export const GASEFFICIENCY = worksheet({
+  id: 'GASEFFICIENCY',
+  args: [num('flow_Nm3_h', domains.nonNegative, 'Nm³/h'), num('current_A', domains.positive, 'A'), electrons, cells, reference],
+  compute: gasFlowEfficiency,
 });
 
 export const H2INAIR = worksheet({

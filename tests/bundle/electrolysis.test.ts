@@ -141,3 +141,12 @@ describe('gas in normal m³', () => {
     expect(one(await call('WATERVAPOR', 26.85))).toBeCloseTo(0.0353658941, 9); // IAPWS IF97-Rev Table 35
   });
 });
+
+describe('GASEFFICIENCY', () => {
+  it('a metered dry flow over the flow at 100 %; an impossible flow is #VALUE!', async () => {
+    expect(one(await call('GASEFFICIENCY', 40.98, 1000, 2, 100, null))).toBeCloseTo(40.98 / ((100 * 1000 * 3600) / (2 * F) * VM0), 9);
+    const r = await call('GASEFFICIENCY', [[40], [60]], 1000, 2, 100, null);
+    expect(r[0][0]).toBeCloseTo(40 / 41.815, 4);
+    expect(isError(r[1][0], '#VALUE!')).toBe(true);
+  });
+});

@@ -72,3 +72,14 @@ describe('heat and hydrogen in air', () => {
     expect(() => hydrogenInAir(0, 0, 4)).toThrow(InputError);
   });
 });
+
+describe('gasFlowEfficiency', () => {
+  it('is the metered flow over the flow at 100 %', async () => {
+    const { gasFlowEfficiency } = await import('../../src/electrolysis/gasFlowEfficiency');
+    // 100 cells × 1 kA × 0.41815 Nm³/(kA·h) = 41.815 Nm³/h at 100 %
+    expect(gasFlowEfficiency(40.98, 1000, 2, 100, '0C')).toBeCloseTo(40.98 / 41.815, 4);
+    expect(gasFlowEfficiency(normalGasFlow(1000, 2, 0.97, 100, '20C'), 1000, 2, 100, '20C')).toBeCloseTo(0.97, 12);
+    // a flow the current cannot make (wrong reference, wet gas, wrong cell count) is an input error
+    expect(() => gasFlowEfficiency(50, 1000, 2, 100, '0C')).toThrow(InputError);
+  });
+});
