@@ -1,4 +1,4 @@
-import { InputError } from '../errors';
+import { InputError, finite } from '../errors';
 import { normalGasFlow } from './normalGasFlow';
 
 /**
@@ -17,10 +17,10 @@ import { normalGasFlow } from './normalGasFlow';
  * @param reference "0C", "15C" or "20C"
  */
 export function gasFlowEfficiency(flowNm3H: number, currentA: number, n: number, cells: number, reference: string): number {
-  const eff = flowNm3H / normalGasFlow(currentA, n, 1, cells, reference);
+  const eff = finite(flowNm3H / normalGasFlow(currentA, n, 1, cells, reference), 'the efficiency');
   if (eff > 1.05) {
     throw new InputError(
-      `the metered flow is ${(eff * 100).toFixed(1)} % of what the current can make; check the flow's reference conditions and that it is dry, the current and the cell count`,
+      `the metered flow is ${eff < 1e6 ? `${(eff * 100).toFixed(1)} % of` : 'far more than'} what the current can make; check the flow's reference conditions and that it is dry, the current and the cell count`,
     );
   }
   return eff;
