@@ -134,6 +134,7 @@ export type ArgKind =
   | 'coupleOrPotential' // a couple key → CoupleRow, or a number → potential in V
   | 'electrode' //  a reference-electrode key or alias → ElectrodeRow
   | 'species' //    a formula text (kept as text) or a molar mass in g/mol (kept as number > 0)
+  | 'boolean' //    TRUE or FALSE (also 1/0 and the texts "TRUE"/"FALSE")
   | 'numberList' // a whole range of numbers, not broadcast (e.g. COMBINE's potentials)
   | 'textList'; //  a whole range of texts, not broadcast
 
@@ -141,7 +142,7 @@ export interface ArgSpec {
   readonly name: string;
   readonly kind: ArgKind;
   /** Optional arguments take this default when omitted (null) or empty. Omit for required ones. */
-  readonly default?: number | string | null;
+  readonly default?: number | string | boolean | null;
   readonly optional?: boolean;
   /** Domain of a number (kinds number, coupleOrPotential's number, species' molar mass, numberList). */
   readonly domain?: Domain;
@@ -150,7 +151,7 @@ export interface ArgSpec {
 }
 
 /** Converted value handed to compute functions. */
-export type ArgValue = number | string | CoupleRow | ElectrodeRow | number[] | string[] | null;
+export type ArgValue = number | string | boolean | CoupleRow | ElectrodeRow | number[] | string[] | null;
 
 export interface FunctionSpec {
   /** The worksheet id, e.g. "NERNST". */
@@ -332,6 +333,17 @@ function textFrom(raw: unknown, spec: ArgSpec): string | CustomFunctions.Error {
   return invalidValue(`${spec.name} must be text; got ${show(raw)}`);
 }
 
+function booleanFrom(raw: unknown, spec: ArgSpec): boolean | CustomFunctions.Error {
+  if (typeof raw === 'boolean') return raw;
+  if (raw === 0 || raw === 1) return raw === 1;
+  if (typeof raw === 'string') {
+    const t = raw.trim().toUpperCase();
+    if (t === 'TRUE' || t === 'FALSE') return t === 'TRUE';
+  }
+  if (isErrorValue(raw)) return asResultError(raw, spec.name);
+  return invalidValue(`${spec.name} must be TRUE or FALSE; got ${show(raw)}`);
+}
+
 function makeConverter(spec: ArgSpec): Converter {
   const withDefault = (inner: Converter): Converter => {
     if (!spec.optional && spec.default === undefined) return inner;
@@ -367,6 +379,8 @@ function makeConverter(spec: ArgSpec): Converter {
         return textFrom(raw, spec);
       });
     }
+    case 'boolean':
+      return withDefault((raw) => booleanFrom(raw, spec));
     case 'numberList':
     case 'textList':
       throw new Error('list arguments are read whole, not per element');

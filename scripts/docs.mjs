@@ -47,6 +47,7 @@ function formatValue(v) {
   if (typeof v === 'string') return `"${v}"`;
   if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   if (typeof v === 'number') return formatNumber(v);
+  if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   return String(v);
 }
 
@@ -100,6 +101,7 @@ const KIND_UNIT = {
   coupleOrPotential: 'couple key, or V',
   electrode: 'electrode key',
   species: 'formula, or g/mol',
+  boolean: 'TRUE or FALSE',
   text: 'text',
   textList: 'text, a range',
 };
@@ -117,6 +119,7 @@ function defaultOf(arg) {
   if (!arg.optional) return 'required';
   if (arg.default === null || arg.default === undefined) return DEFAULT_IN_WORDS;
   if (typeof arg.default === 'string') return `"${arg.default}"`;
+  if (typeof arg.default === 'boolean') return arg.default ? 'TRUE' : 'FALSE';
   return formatNumber(arg.default);
 }
 

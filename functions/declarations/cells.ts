@@ -10,7 +10,7 @@
 import * as F from '../families/cells';
 
 /**
- * Standard cell EMF E°cell = E°(cathode) − E°(anode), in V. Never reorders: a pairing that does not run by itself gives a negative value.
+ * Standard cell EMF E°cell = E°(cathode) − E°(anode), in V. Never reorders: a pairing that does not run by itself gives a negative value. Sign convention: positive when the reaction runs by itself (galvanic); an electrolysis as written is negative, and DECOMPOSITIONVOLTAGE gives its positive decomposition voltage.
  * @customfunction EMF
  * @helpurl https://localhost:3000/docs/functions.html#emf
  * @param cathode Couple key (e.g. "Cu2+/Cu") or a potential in V vs SHE.
@@ -60,7 +60,7 @@ function cellReaction(cathode: any[][], anode: any[][]): any[][] {
 }
 
 /**
- * Cell potential at a reaction quotient: E = E°cell − (RT/nF)·ln Q, in V, with n from CELLELECTRONS and Q of the reaction CELLREACTION writes.
+ * Cell potential at a reaction quotient: E = E°cell − (RT/nF)·ln Q, in V, with n from CELLELECTRONS and Q of the reaction CELLREACTION writes. Sign convention: positive when the reaction runs by itself; an electrolysis as written is negative (its decomposition voltage is −E).
  * @customfunction CELLPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#cellpotential
  * @param cathode Couple key of the cathode (where reduction happens).

@@ -138,17 +138,18 @@ function specificEnergy(cell_voltage_V: any[][], species: any[][], n: any[][], e
 }
 
 /**
- * Volume of ideal gas evolved by a current, in L, at a temperature (°C) and pressure (bar).
+ * Volume of gas evolved by a current (ideal gas, dry basis unless saturated is TRUE), in L.
  * @customfunction GASVOLUME
  * @helpurl https://localhost:3000/docs/functions.html#gasvolume
  * @param current_A Current, in A.
- * @param time_h Time, in h.
+ * @param time_h Time, in h (hours, not an Excel time value: 30 min is 0.5).
  * @param n Electrons per gas molecule (2 for H2 and Cl2, 4 for O2).
- * @param [temperature_C] Gas temperature in °C (default 25).
- * @param [pressure_bar] Gas pressure in bar (default 1).
  * @param [efficiency] Current efficiency as a fraction, 0 to 1 (default 1).
+ * @param [temperature_C] Gas temperature in °C (default 25).
+ * @param [pressure_bar] Total gas pressure in bar (default 1).
+ * @param [saturated] FALSE (default): dry gas at the total pressure. TRUE: gas saturated with water vapour at the temperature (IAPWS-IF97 saturation pressure), so the volume is larger by p/(p − p_water).
  * @returns Volume in L.
  */
-function gasVolume(current_A: any[][], time_h: any[][], n: any[][], temperature_C?: any[][], pressure_bar?: any[][], efficiency?: any[][]): any[][] {
-  return F.GASVOLUME(current_A, time_h, n, temperature_C, pressure_bar, efficiency) as any;
+function gasVolume(current_A: any[][], time_h: any[][], n: any[][], efficiency?: any[][], temperature_C?: any[][], pressure_bar?: any[][], saturated?: any[][]): any[][] {
+  return F.GASVOLUME(current_A, time_h, n, efficiency, temperature_C, pressure_bar, saturated) as any;
 }

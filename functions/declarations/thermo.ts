@@ -99,7 +99,7 @@ function combine(potentials: any[][], electrons: any[][]): any[][] {
 }
 
 /**
- * Potential from ΔH and ΔS taken as constant: E = −(ΔH − TΔS)/(nF), in V.
+ * Potential from ΔH and ΔS taken as constant: E = −(ΔH − TΔS)/(nF), in V. Sign convention: positive when the reaction runs by itself; for water electrolysis (ΔH = +285.83 kJ/mol) it is negative, and the reversible voltage the cell needs is −E.
  * @customfunction EFROMTHERMO
  * @helpurl https://localhost:3000/docs/functions.html#efromthermo
  * @param deltaH_kJ ΔH in kJ/mol.
@@ -113,7 +113,7 @@ function eFromThermo(deltaH_kJ: any[][], deltaS_J_K: any[][], n: any[][], temper
 }
 
 /**
- * Thermoneutral potential −ΔH/(nF), in V (an electrolysis as written gives a negative value).
+ * Thermoneutral potential −ΔH/(nF), in V. Sign convention: ΔH of the reaction as written, so an electrolysis (ΔH > 0) gives a negative value and the thermoneutral voltage the cell needs is its magnitude (water at 25 °C: 1.481 V on the HHV basis, see VOLTAGEEFFICIENCY); entering ΔH with the other sign flips the result.
  * @customfunction THERMONEUTRAL
  * @helpurl https://localhost:3000/docs/functions.html#thermoneutral
  * @param deltaH_kJ ΔH of the reaction as written, in kJ/mol.

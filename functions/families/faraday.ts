@@ -79,9 +79,10 @@ export const GASVOLUME = worksheet({
     num('current_A', domains.nonNegative, 'A'),
     num('time_h', domains.nonNegative, 'h'),
     electrons,
+    efficiency,
     temperatureC,
     { name: 'pressure_bar', kind: 'number', optional: true, default: STANDARD_PRESSURE_BAR, domain: domains.positive, unit: 'bar' },
-    efficiency,
+    { name: 'saturated', kind: 'boolean', optional: true, default: false, unit: '' },
   ],
   compute: gasVolume,
 });

@@ -28,7 +28,7 @@ describe('metadata', () => {
     const names = (id: string) => byId.get(id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
     expect(names('CONVERTPOTENTIAL')).toBe('potential_V, from_scale, to_scale, [pH], [temperature_C]');
     expect(names('PLATETHICKNESS')).toBe('current_density_A_dm2, time_min, species, n, density_g_cm3, [efficiency]');
-    expect(names('GASVOLUME')).toBe('current_A, time_h, n, [temperature_C], [pressure_bar], [efficiency]');
+    expect(names('GASVOLUME')).toBe('current_A, time_h, n, [efficiency], [temperature_C], [pressure_bar], [saturated]');
     expect(names('MEANACTIVITYCOEF')).toBe('z_cation, z_anion, ionic_strength, [model], [temperature_C], [ion_size_A]');
     expect(names('OVERPOTENTIAL')).toBe('i, i0, alpha_a, [alpha_c], [temperature_C]');
     expect(names('STERNGEARY')).toBe('beta_a_V, beta_c_V, polarization_resistance_ohm_cm2');
@@ -118,7 +118,7 @@ describe("Faraday's law", () => {
   it('CURRENTEFFICIENCY, SPECIFICENERGY and GASVOLUME', async () => {
     expect(one(await run('CURRENTEFFICIENCY', 11, 10, 1, 'Cu', 2))).toBeCloseTo(0.928, 3); // 11.0/(10 × 1.186)
     expect(one(await run('SPECIFICENERGY', 4.2, 'Al', 3, 0.95))).toBeCloseTo(13.17, 2); // Hall–Héroult 13–14 kWh/kg, common practice
-    expect(one(await run('GASVOLUME', 1, 1, 2, 0, 1.01325))).toBeCloseTo(0.418, 3); // 0.418 L H2 per A·h at 0 °C, 1 atm (CODATA molar volume)
+    expect(one(await run('GASVOLUME', 1, 1, 2, 1, 0, 1.01325))).toBeCloseTo(0.418, 3); // 0.418 L H2 per A·h at 0 °C, 1 atm (CODATA molar volume)
     expect(one(await run('GASVOLUME', 1, 1, 2, null, null, null))).toBeCloseTo((0.418148 * 298.15) / 273.15 * 1.01325, 5); // 25 °C, 1 bar defaults
   });
 });

@@ -44,6 +44,8 @@ function cellArb(param: string): fc.Arbitrary<unknown> {
 
 /** One argument: a single value, or a range of a shape that combines with R×C. */
 function argArb(param: string, broadcast: boolean, rows: number, cols: number): fc.Arbitrary<Shaped> {
+  // a header switch adds a row of labels on top by design (tests/bundle/electrolysis.test.ts checks it)
+  if (param === 'header') return fc.constant({ value: null });
   const cell = cellArb(param);
   const grid = (r: number, c: number) =>
     fc.array(fc.array(cell, { minLength: c, maxLength: c }), { minLength: r, maxLength: r }).map((data) => ({ rows: r, cols: c, data }));
