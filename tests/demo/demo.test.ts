@@ -25,7 +25,8 @@ let bundle: LoadedBundle;
 /** A cell's stored value as the evaluator sees it: formulas give their cached result. */
 function stored(cell: ExcelJS.Cell): Scalar {
   let v = cell.value as unknown;
-  if (v !== null && typeof v === 'object' && 'formula' in (v as object)) v = (v as { result?: unknown }).result ?? null;
+  // cell.result, not cell.value.result: the reader leaves a cached 0 out of cell.value (it is in the file as <v>0</v>)
+  if (v !== null && typeof v === 'object' && 'formula' in (v as object)) v = (cell as unknown as { result?: unknown }).result ?? null;
   if (v !== null && typeof v === 'object' && 'error' in (v as object)) return { code: String((v as { error: unknown }).error) };
   if (v === undefined) return null;
   return v as Scalar;
