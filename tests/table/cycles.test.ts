@@ -42,8 +42,6 @@ const MTQ = {
   agCN2: 20.48, // line 4020: Ag+ + 2CN- = Ag(CN)2- (NIST46.4)
   cuCN2: 21.9145, // line 3996: Cu+ + 2CN- = Cu(CN)2- (NIST46.4)
   cuCN3: 27.2145, // line 4004: Cu+ + 3CN- = Cu(CN)3^2- (NIST46.4)
-  feCN6III: 43.6, // line 4116: Fe3+ + 6CN- = Fe(CN)6^3- (NIST46.4)
-  feCN6II: 35.4, // line 4092: Fe2+ + 6CN- = Fe(CN)6^4- (NIST46.4)
   zincite: 11.334, // line 10917 Zincite: ZnO + 2H+ = Zn2+ + H2O
   snOH2ToHSnO2: -8.9347, // line 578: Sn(OH)2 = HSnO2- + H+
   snOH2ToSn2: 7.094, // line 538: Sn(OH)2 + 2H+ = Sn2+ + 2H2O
@@ -98,12 +96,6 @@ const cycles: Cycle[] = [
   { name: 'Ag(CN)2-/Ag = Ag+/Ag with β2', left: () => E('Ag(CN)2-/Ag'), right: () => E('Ag+/Ag') - k * MTQ.agCN2, n: 1 },
   { name: 'Cu(CN)2-/Cu = Cu+/Cu with β2', left: () => E('Cu(CN)2-/Cu'), right: () => E('Cu+/Cu') - k * MTQ.cuCN2, n: 1 },
   { name: 'Cu(CN)3^2-/Cu = Cu+/Cu with β3', left: () => E('Cu(CN)3^2-/Cu'), right: () => E('Cu+/Cu') - k * MTQ.cuCN3, n: 1 },
-  {
-    name: 'Fe(CN)6^3-/Fe(CN)6^4- = Fe3+/Fe2+ with β6(III)/β6(II)',
-    left: () => E('Fe(CN)6^3-/Fe(CN)6^4-'),
-    right: () => E('Fe3+/Fe2+') - k * (MTQ.feCN6III - MTQ.feCN6II),
-    n: 1,
-  },
   { name: 'ZnO/Zn = Zn2+/Zn with ZnO solubility and Kw', left: () => 2 * E('ZnO/Zn'), right: () => 2 * E('Zn2+/Zn') + k * (MTQ.zincite + 2 * MTQ.logKw), n: 2 },
   {
     // Zn(OH)4^2- + 4H+ = Zn2+ + 4H2O (−log K of the LLNL hydrolysis) and 4H2O = 4H+ + 4OH- (4·log Kw): the zincate row
