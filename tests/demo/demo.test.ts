@@ -80,7 +80,7 @@ beforeAll(async () => {
   wb = new ExcelJS.Workbook();
   if (existsSync(XLSX)) await wb.xlsx.readFile(XLSX);
   bundle = loadBundle();
-});
+}, 60_000); // the demo runs in a child process: allow for a machine busy with the rest of the suite
 
 describe('npm run demo', () => {
   it('runs in seconds without an unexpected error and prints every sheet', () => {
