@@ -160,7 +160,7 @@ export const scenario = {
         { section: 'QA: consistency checks on the table' },
         { key: 'cuComb', label: 'E°(Cu²⁺/Cu) from Cu²⁺/Cu⁺ and Cu⁺/Cu (adding free energies)', formula: '=CELLWRIGHT.COMBINE({qa.e0#2}:{qa.e0#3},{qa.n#2}:{qa.n#3})', unit: 'V', digits: 4 },
         { key: 'cuStored', label: 'E°(Cu²⁺/Cu) as stored', formula: '={qa.e0#1}', unit: 'V', digits: 4 },
-        { label: 'Difference', formula: '=({cuComb}-{cuStored})*1000', unit: 'mV', digits: 1, note: 'the compilation\'s own three values do not close exactly: a template should say which one it uses' },
+        { label: 'Difference', formula: '=({cuComb}-{cuStored})*1000', unit: 'mV', digits: 1, note: 'the table\'s three values come from one consistent basis and close; a workbook\'s edited table may not' },
         { key: 'ksp', label: 'Solubility product of AgCl at 25 °C', value: 1.77e-10, note: 'handbook value' },
         { label: 'E°(AgCl/Ag) from E°(Ag⁺/Ag) and Ksp', formula: '={qa.e0#10}+CELLWRIGHT.EFROMK({ksp},1)', unit: 'V', digits: 4 },
         { label: 'The same from log10 Ksp = −9.752', formula: '={qa.e0#10}+CELLWRIGHT.EFROMLOGK(-9.752,1)', unit: 'V', digits: 4 },

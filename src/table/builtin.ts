@@ -34,7 +34,7 @@ function build(): BuiltTable {
  * The built-in table (built on first use, then cached).
  *
  * Syntax: builtinTable()
- * Example: builtinTable().findCouple("Cu2+/Cu").e0 → 0.3419
+ * Example: builtinTable().findCouple("Cu2+/Cu").e0 → 0.3372
  * See also: buildTable, builtinTableProblems
  */
 export function builtinTable(): PotentialTable {

@@ -34,10 +34,10 @@ describe('data/atomic-weights.json', () => {
 
 describe('atomicWeight', () => {
   it('reads the abridged values', () => {
-    expect(atomicWeight('Ni')).toBe(58.693); // IUPAC CIAAW 2021 abridged, from memory
-    expect(atomicWeight('Cu')).toBe(63.546); // IUPAC CIAAW 2021 abridged, from memory
-    expect(atomicWeight('Zn')).toBe(65.38); // IUPAC CIAAW 2021 abridged, from memory
-    expect(atomicWeight('Pb')).toBe(207.2); // IUPAC CIAAW 2021 abridged (interval [206.14, 207.94]), from memory
+    expect(atomicWeight('Ni')).toBe(58.693); // IUPAC CIAAW 2021 abridged (Prohaska et al. 2022, Table 1; read in github.com/MilanSkocic/ciaaw data/src/saw_2021.txt)
+    expect(atomicWeight('Cu')).toBe(63.546); // IUPAC CIAAW 2021 abridged (Prohaska et al. 2022, Table 1; read in github.com/MilanSkocic/ciaaw data/src/saw_2021.txt)
+    expect(atomicWeight('Zn')).toBe(65.38); // IUPAC CIAAW 2021 abridged (Prohaska et al. 2022, Table 1; read in github.com/MilanSkocic/ciaaw data/src/saw_2021.txt)
+    expect(atomicWeight('Pb')).toBe(207.2); // IUPAC CIAAW 2021 abridged (interval [206.14, 207.94]; read in github.com/MilanSkocic/ciaaw data/src/saw_2021.txt)
   });
   it('an element without a standard atomic weight, or a non-element, is not found', () => {
     expect(() => atomicWeight('Tc')).toThrow(NotFoundError);

@@ -13,13 +13,13 @@ const S = 0.0591593;
 
 describe('halfCell: handbook checks', () => {
   it('MnO4-/Mn2+ at pH 3 drops by (8/5)·0.05916·3 V', () => {
-    // E° 1.507 V (CRC Handbook, from memory); 8 H+ per 5 e- (Bard & Faulkner; any textbook Nernst example)
-    expect(halfCell(row('MnO4-/Mn2+'), null, null, 3, 25)).toBeCloseTo(1.507 - (8 / 5) * S * 3, 6);
+    // E° 1.5111 V: data/couples.json (Thermoddem V1.10, computed from the cited log K); 8 H+ per 5 e- (Bard & Faulkner; any textbook Nernst example)
+    expect(halfCell(row('MnO4-/Mn2+'), null, null, 3, 25)).toBeCloseTo(1.5111 - (8 / 5) * S * 3, 6);
   });
 
-  it('Cu2+/Cu at a(Cu2+) = 0.01: 0.3419 − 0.02958·2 = 0.2827 V', () => {
-    // E° 0.3419 V (CRC Handbook, from memory)
-    expect(halfCell(row('Cu2+/Cu'), 0.01, null, null, 25)).toBeCloseTo(0.3419 - S, 6);
+  it('Cu2+/Cu at a(Cu2+) = 0.01: 0.3372 − 0.02958·2 = 0.2780 V', () => {
+    // E° 0.3372 V: data/couples.json (Thermoddem V1.10, computed from the cited log K)
+    expect(halfCell(row('Cu2+/Cu'), 0.01, null, null, 25)).toBeCloseTo(0.3372 - S, 6);
     // the metal is a solid: red_activity does not change E
     expect(halfCell(row('Cu2+/Cu'), 0.01, 0.5, null, 25)).toBe(halfCell(row('Cu2+/Cu'), 0.01, 1, null, 25));
   });
@@ -31,18 +31,19 @@ describe('halfCell: handbook checks', () => {
     expect(halfCell(row('H+/H2'), null, 10, 0, 25)).toBeCloseTo(-S / 2, 6);
   });
 
-  it('AgCl/Ag with a(Cl-) = 0.1: 0.22233 + 0.05916 V', () => {
-    // E° 0.22233 V (CRC Handbook, 92nd ed., read); Cl- is the only dissolved species, on the reduced side
-    expect(halfCell(row('AgCl/Ag'), null, 0.1, null, 25)).toBeCloseTo(0.22233 + S, 6);
+  it('AgCl/Ag with a(Cl-) = 0.1: 0.2225 + 0.05916 V', () => {
+    // E° 0.2225 V: data/couples.json (Thermoddem V1.10, computed from the cited log K) (the CRC Handbook, 92nd ed., lists 0.22233 V); Cl- is the only dissolved species, on the reduced side
+    expect(halfCell(row('AgCl/Ag'), null, 0.1, null, 25)).toBeCloseTo(0.2225 + S, 6);
   });
 
   it('dichromate: ox activity to Cr2O7^2-, red activity to Cr3+ squared', () => {
-    // E° 1.232 V (CRC Handbook, from memory); Q = a(Cr3+)²/a(Cr2O7^2-) = 1e-4/0.1 = 1e-3 at pH 0
-    expect(halfCell(row('Cr2O7^2-/Cr3+'), 0.1, 0.01, 0, 25)).toBeCloseTo(1.232 + (S / 6) * 3, 6);
+    // E° 1.3065 V: data/couples.json (Thermoddem V1.10, computed from the cited log K); Q = a(Cr3+)²/a(Cr2O7^2-) = 1e-4/0.1 = 1e-3 at pH 0
+    expect(halfCell(row('Cr2O7^2-/Cr3+'), 0.1, 0.01, 0, 25)).toBeCloseTo(1.3065 + (S / 6) * 3, 6);
   });
 
   it('the acid and alkaline forms of one couple agree at every pH within the data (≤ 1 mV)', () => {
-    // O2/H2O (1.229 V) and O2/OH- (0.401 V), H+/H2 (0) and H2O/H2 (−0.8277 V): CRC Handbook; pKw 13.995 at 25 °C (Bandura & Lvov 2006)
+    // O2/H2O (1.2292 V) and O2/OH- (0.4008 V), H+/H2 (0) and H2O/H2 (−0.8283 V): data/couples.json (Thermoddem V1.10);
+    // pKw 13.995 at 25 °C (Bandura & Lvov 2006)
     fc.assert(fc.property(fc.double({ min: 0, max: 14, noNaN: true }), (pH) => {
       expect(Math.abs(halfCell(row('O2/H2O'), 1, null, pH, 25) - halfCell(row('O2/OH-'), 1, null, pH, 25))).toBeLessThan(0.001);
       expect(Math.abs(halfCell(row('H+/H2'), null, 1, pH, 25) - halfCell(row('H2O/H2'), null, 1, pH, 25))).toBeLessThan(0.001);
@@ -50,12 +51,12 @@ describe('halfCell: handbook checks', () => {
   });
 
   it('uses E°(T) and RT/nF at the temperature', () => {
-    // Cu2+/Cu at 50 °C, a = 0.01: E°(50) = 0.3419 + 0.011e-3·25 (Bratsch 1989, from memory)
+    // Cu2+/Cu at 50 °C, a = 0.01: E°(50) = 0.3372 − 0.002e-3·25 (data/couples.json (Thermoddem V1.10, computed from the cited log K), dE°/dT from the cited ΔrH)
     const e = halfCell(row('Cu2+/Cu'), 0.01, null, null, 50);
     const slope = (GAS_CONSTANT_J_PER_MOL_K * 323.15) / (2 * FARADAY_C_PER_MOL);
-    expect(e).toBeCloseTo(0.3419 + 0.011e-3 * 25 - slope * Math.log(100), 9);
-    // O2/H2O at 80 °C and pH 0: the E°(T) of the reversible oxygen electrode, 1.229 − 0.846e-3·55 V
-    expect(halfCell(row('O2/H2O'), 1, null, 0, 80)).toBeCloseTo(1.229 - 0.846e-3 * 55, 9);
+    expect(e).toBeCloseTo(0.3372 - 0.002e-3 * 25 - slope * Math.log(100), 9);
+    // O2/H2O at 80 °C and pH 0: the E°(T) of the reversible oxygen electrode, 1.2292 − 0.845e-3·55 V
+    expect(halfCell(row('O2/H2O'), 1, null, 0, 80)).toBeCloseTo(1.2292 - 0.845e-3 * 55, 9);
   });
 });
 
@@ -79,7 +80,7 @@ describe('halfCell: properties and errors', () => {
   it('refuses activities ≤ 0 and says when E° cannot be moved to T', () => {
     expect(() => halfCell(row('Cu2+/Cu'), 0, null, null, 25)).toThrow(DomainError);
     expect(() => halfCell(row('Cu2+/Cu'), 1, -1, null, 25)).toThrow(DomainError);
-    expect(() => halfCell(row('MnO4-/Mn2+'), 1, 1, 3, 60)).toThrow(NotFoundError);
+    expect(() => halfCell(row('Bi3+/Bi'), 1, 1, 3, 60)).toThrow(NotFoundError);
     expect(() => halfCell(row('Cu2+/Cu'), 1, 1, 3, 101)).toThrow(DomainError);
   });
 });

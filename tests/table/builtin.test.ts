@@ -15,11 +15,12 @@ const REQUIRED = [
 describe('the built-in couple table', () => {
   const table = builtinTable();
 
-  it('has a version and names its compilation', () => {
+  it('has a version and names its basis', () => {
     expect(BUILTIN_TABLE_VERSION).toBe('2026.1');
     expect(table.version).toBe(BUILTIN_TABLE_VERSION);
-    expect(BUILTIN_TABLE_SOURCE).toMatch(/CRC Handbook of Chemistry and Physics, 92nd ed/);
-    expect(BUILTIN_TABLE_SOURCE).toMatch(/Bratsch/);
+    expect(BUILTIN_TABLE_SOURCE).toMatch(/Thermoddem V1\.10/);
+    expect(BUILTIN_TABLE_SOURCE).toMatch(/CODATA Key Values for Thermodynamics/);
+    expect(couplesFile.description).toMatch(/Rule for choosing values/);
   });
 
   it('has no row with a problem, and every data row made it into the table', () => {
@@ -27,39 +28,56 @@ describe('the built-in couple table', () => {
     expect(table.couples).toHaveLength(couplesFile.couples.length);
   });
 
-  it.each(couplesFile.couples.map((r) => [r.key, r] as const))('%s parses, balances and has a source', (_key, record) => {
+  it.each(couplesFile.couples.map((r) => [r.key, r] as const))('%s parses, balances and cites a stored source', (_key, record) => {
     const v = validateCoupleRecord(record);
     expect(v.problems).toEqual([]);
     expect(() => parseHalfReaction(record.halfReaction)).not.toThrow();
-    expect(record.source.trim().length).toBeGreaterThan(10);
-    // every row names the CRC edition it follows (H+/H2 names the definition as well)
-    expect(record.source).toMatch(/CRC Handbook of Chemistry and Physics, 92nd ed/);
-    if ('dEdT_mV_K' in record && record.key !== 'H+/H2') expect(record.source).toMatch(/Bratsch/);
+    // every row names where its numbers can be found again: a stored copy at a commit, or the IUPAC definition
+    if (record.key === 'H+/H2') expect(record.source).toMatch(/goldbook\.S05917/);
+    else expect(record.source).toMatch(/commit [0-9a-f]{12}/);
+    expect(`${record.source} ${record.note ?? ''}`).not.toMatch(/from memory/i);
   });
 
   it.each(REQUIRED)('holds %s', (key) => {
     expect(table.findCouple(key)).toBeDefined();
   });
 
-  it('stores the CRC values of the handbook checks', () => {
-    // CRC Handbook of Chemistry and Physics, 92nd ed., Electrochemical Series (Vanýsek):
-    expect(table.findCouple('Cu2+/Cu')!.e0).toBe(0.3419); // from memory
-    expect(table.findCouple('Zn2+/Zn')!.e0).toBe(-0.7618); // from memory
-    expect(table.findCouple('Ag+/Ag')!.e0).toBe(0.7996); // read in the 92nd-ed. text
-    expect(table.findCouple('AgCl/Ag')!.e0).toBe(0.22233); // read in the 92nd-ed. text
-    expect(table.findCouple('Fe3+/Fe2+')!.e0).toBe(0.771); // from memory
-    expect(table.findCouple('Fe2+/Fe')!.e0).toBe(-0.447); // from memory
-    expect(table.findCouple('Fe3+/Fe')!.e0).toBe(-0.037); // from memory; the value the brief asks to store
-    expect(table.findCouple('O2/H2O')!.e0).toBe(1.229); // from memory
-    expect(table.findCouple('MnO4-/Mn2+')!.e0).toBe(1.507); // from memory
+  it('holds the plating, refining and water-treatment couples', () => {
+    for (const key of ['Ag(CN)2-/Ag', 'Cu(CN)2-/Cu', 'Cu(CN)3^2-/Cu', 'Zn(OH)4^2-/Zn', 'HSnO2-/Sn', 'Sn(OH)6^2-/Sn', 'AuCl2-/Au', 'CuCl2-/Cu', 'O3/O2', 'ClO-/Cl-']) {
+      expect(table.findCouple(key), key).toBeDefined();
+    }
+  });
+
+  it('stores E° computed from the cited constants', () => {
+    // k = RT ln10/F at 298.15 K with CODATA 2018 R and F
+    const k = (8.314462618 * 298.15 * Math.LN10) / 96485.33212;
+    // Thermoddem V1.10: Cu(element) log K 31.601 (Cu + 0.5 O2(aq) + 2H+ = Cu2+ + H2O) and H2(g) log K 43.001
+    // (H2 + 0.5 O2(aq) = H2O); against the SHE, Cu2+ + H2 → Cu + 2H+ has log K = 43.001 − 31.601: E° = k·11.400/2
+    expect(table.findCouple('Cu2+/Cu')!.e0).toBeCloseTo((k * (43.001 - 31.601)) / 2, 4);
+    // MINTEQA2 v4: Znmetal log K 25.7886 (Zn = Zn2+ + 2e-), electron scale = SHE: E° = −k·25.7886/2
+    expect(table.findCouple('Zn2+/Zn')!.e0).toBeCloseTo((-k * 25.7886) / 2, 4);
+    // Thermoddem V1.10: Fe(element) log K 58.856 (Fe + 0.5 O2(aq) + 2H+ = Fe2+ + H2O)
+    expect(table.findCouple('Fe2+/Fe')!.e0).toBeCloseTo((k * (43.001 - 58.856)) / 2, 4);
+    // Parker & Khodakovskii, J. Phys. Chem. Ref. Data 24 (1995) 1699 (abstract): ΔfG°(Fe2+) = −90.53 ± 1.0 kJ/mol,
+    // so E° = −90530/(2F) = −0.4691 V; the table's basis agrees within its uncertainty
+    expect(Math.abs(table.findCouple('Fe2+/Fe')!.e0 - -90530 / (2 * 96485.33212))).toBeLessThan(0.001);
+    // CRC Handbook, 92nd ed. (2011), Electrochemical Series, Table 1 (read): Ag+/Ag 0.7996 V, AgCl/Ag 0.22233 V, AgBr/Ag 0.07133 V
+    expect(Math.abs(table.findCouple('Ag+/Ag')!.e0 - 0.7996)).toBeLessThan(0.001);
+    expect(Math.abs(table.findCouple('AgCl/Ag')!.e0 - 0.22233)).toBeLessThan(0.001);
+    expect(Math.abs(table.findCouple('AgBr/Ag')!.e0 - 0.07133)).toBeLessThan(0.001);
     expect(table.findCouple('H+/H2')!.e0).toBe(0); // definition of the SHE (IUPAC)
   });
 
-  it('stores Bratsch temperature coefficients where given', () => {
-    // Bratsch, J. Phys. Chem. Ref. Data 18 (1989) 1, from memory:
-    expect(table.findCouple('Cu2+/Cu')!.dEdT_mV_K).toBe(0.011);
-    expect(table.findCouple('O2/H2O')!.dEdT_mV_K).toBe(-0.846);
-    expect(table.findCouple('Cl2/Cl-')!.dEdT_mV_K).toBe(-1.248);
+  it('stores dE°/dT = ΔrS°/(nF) from the cited reaction enthalpies', () => {
+    const F = 96485.33212;
+    const RTln10 = 8.314462618 * 298.15 * Math.LN10;
+    // Thermoddem V1.10: O2(g) → O2(aq) log K −2.893, ΔrH −12.134 kJ/mol; H2(g) + 0.5 O2(aq) → H2O log K 43.001,
+    // ΔrH −279.763 kJ/mol. For O2(g) + 2H2(g) → 2H2O: log K = 2·43.001 − 2.893, ΔrH = 2·(−279.763) − 12.134
+    const logK = 2 * 43.001 - 2.893;
+    const dH = (2 * -279.763 - 12.134) * 1000;
+    const dS = (dH + RTln10 * logK) / 298.15;
+    expect(table.findCouple('O2/H2O')!.dEdT_mV_K).toBeCloseTo((dS / (4 * F)) * 1000, 3);
+    expect(table.findCouple('O2/H2O')!.e0).toBeCloseTo((RTln10 * logK) / (4 * F), 4);
     expect(table.findCouple('H+/H2')!.dEdT_mV_K).toBe(0); // E°(SHE) = 0 at every temperature (IUPAC)
   });
 
@@ -68,36 +86,7 @@ describe('the built-in couple table', () => {
     expect(table.findCouple('Cr2O7^2-/Cr3+')!.n).toBe(6);
     expect(table.findCouple('O2/OH-')!.n).toBe(4);
     expect(table.findCouple('Fe3+/Fe')!.n).toBe(3);
-  });
-
-  it('is self-consistent where free energies must add: Cu2+/Cu from Cu2+/Cu+ and Cu+/Cu', () => {
-    // 2·E(Cu2+/Cu) = E(Cu2+/Cu+) + E(Cu+/Cu) by adding free energies; with the CRC values (0.153 + 0.521)/2 = 0.337 V
-    // against the listed 0.3419 V: compiled values are not exactly consistent, but within 5 mV here
-    const t = builtinTable();
-    const sum = (t.findCouple('Cu2+/Cu+')!.e0 + t.findCouple('Cu+/Cu')!.e0) / 2;
-    expect(Math.abs(sum - t.findCouple('Cu2+/Cu')!.e0)).toBeLessThan(0.005);
-  });
-
-  it('E° of Fe3+/Fe by adding free energies of Fe3+/Fe2+ and Fe2+/Fe is −0.041 V; CRC lists −0.037 V', () => {
-    // textbook worked example (Atkins, Physical Chemistry, "evaluating a standard potential from two others", from memory):
-    // E°(Fe3+/Fe) = (1·0.771 + 2·(−0.447))/3 = −0.041 V with the CRC values 0.771 and −0.447 V (from memory)
-    const t = builtinTable();
-    const fe32 = t.findCouple('Fe3+/Fe2+')!;
-    const fe20 = t.findCouple('Fe2+/Fe')!;
-    const combined = (fe32.n * fe32.e0 + fe20.n * fe20.e0) / (fe32.n + fe20.n);
-    expect(combined).toBeCloseTo(-0.041, 3);
-    // the stored row keeps the compilation's own value, which differs by 4 mV
-    expect(t.findCouple('Fe3+/Fe')!.e0).toBe(-0.037);
-    expect(Math.abs(combined - t.findCouple('Fe3+/Fe')!.e0)).toBeLessThan(0.005);
-  });
-
-  it('acid and alkaline couples differ by the Nernst slope times pKw', () => {
-    // E°(alkaline) = E°(acid) − (RT ln10/F)·pKw with pKw = 13.995 at 25 °C (Bandura & Lvov, J. Phys. Chem. Ref. Data 35
-    // (2006) 15) and 59.159 mV per decade (CODATA 2018): O2/OH- = 1.229 − 0.82793 = 0.4011 V; H2O/H2 = −0.8279 V
-    const t = builtinTable();
-    const shift = 0.0591593 * 13.995;
-    expect(t.findCouple('O2/OH-')!.e0).toBeCloseTo(t.findCouple('O2/H2O')!.e0 - shift, 3);
-    expect(t.findCouple('H2O/H2')!.e0).toBeCloseTo(t.findCouple('H+/H2')!.e0 - shift, 3);
+    expect(table.findCouple('Sn(OH)6^2-/Sn')!.n).toBe(4);
   });
 
   it('is built once and cached', () => {
