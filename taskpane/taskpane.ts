@@ -19,6 +19,7 @@ import { type Child, append, byId, clear, h, replace } from './dom';
 import { type CoupleFields, type ElectrodeFields, checkCoupleForm, checkElectrodeForm } from './forms';
 import { type ActionResult, TableModel } from './model';
 import { copyToSheet } from './sheet';
+import { wireVerification } from './verification';
 
 const builtin = recordsOf(builtinTable());
 const model = new TableModel({ builtin, host: () => globalThis.cellwrightFunctionsHost });
@@ -876,6 +877,7 @@ function wireFiles(): void {
   byId('import-check').addEventListener('click', runImportCheck);
   byId('import-file').addEventListener('change', () => void readImportFile());
   byId('copy-sheet').addEventListener('click', () => void copySheet());
+  wireVerification();
   byId('import-report').tabIndex = -1;
 }
 

@@ -241,7 +241,7 @@ function tableFacts(status) {
  * tableCsv (text of an exported table), onProgress(done, total).
  * Returns the report (see DEVELOPERS.md); throws UnreadableError when the file cannot be read.
  */
-export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null, tableCsvName = null, onProgress = null } = {}) {
+export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null, tableCsvName = null, onProgress = null, collect = false } = {}) {
   const started = performance.now();
   const wb = new ExcelJS.Workbook();
   try {
@@ -449,6 +449,17 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
     else for (const b of bad) differing.push({ ...where, address: b.address, anchor: f.address, stored: b.stored, recomputed: b.recomputed });
   }
   const differingFormulas = new Set(differing.map((d) => `${d.sheet}!${d.anchor}`)).size;
+  // collect: the recomputed value of every formula cell (spilled cells included), for callers that show them
+  let collected;
+  if (collect) {
+    collected = new Map();
+    for (const f of formulas) {
+      const res = results.get(f);
+      const v = 'value' in res ? res.value : { error: 'not evaluable' };
+      if (Array.isArray(v)) v.forEach((row, i) => row.forEach((x, j) => collected.set(`${f.sheet}!${addr(f.r + i, f.c + j)}`, x)));
+      else collected.set(`${f.sheet}!${f.address}`, v);
+    }
+  }
   const seconds = (performance.now() - started) / 1000;
   return {
     table,
@@ -456,6 +467,7 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
     counts: { formulas: total, addinFormulas, agreeing: agree, differing: differingFormulas, notEvaluable: notEvaluable.length, sheets: sheetNames.size },
     differing,
     notEvaluable,
+    ...(collect ? { values: collected } : {}),
     seconds,
     ok: differing.length === 0 && notEvaluable.length === 0,
   };

@@ -135,10 +135,11 @@ async function readWebExtensionsFromZip(zip) {
   const parts = Object.keys(zip.files).filter((p) => /^xl\/webextensions\/webextension[^/]*\.xml$/i.test(p)).sort();
   for (const part of parts) {
     const xml = await zip.file(part).async('string');
-    const ref = xml.match(/<(?:\w+:)?reference\b[^>]*>/);
+    // attribute values may hold ">" (XML does not require it escaped): match quoted values as a whole
+    const ref = xml.match(/<(?:\w+:)?reference\b(?:[^>"']|"[^"]*"|'[^']*')*>/);
     const r = ref ? attrs(ref[0]) : new Map();
     const properties = new Map();
-    for (const m of xml.matchAll(/<(?:\w+:)?property\b[^>]*>/g)) {
+    for (const m of xml.matchAll(/<(?:\w+:)?property\b(?:[^>"']|"[^"]*"|'[^']*')*>/g)) {
       const a = attrs(m[0]);
       if (a.has('name')) properties.set(a.get('name'), a.get('value') ?? '');
     }
