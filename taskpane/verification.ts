@@ -31,7 +31,7 @@ export const NAMESPACE = 'CELLWRIGHT';
 
 export const VERIFICATION_COLUMNS = ['Case', 'Function', 'Inputs', 'Result (live formula)', 'Expected', 'Tolerance (±)', 'Unit', 'Check', 'What', 'Source', 'Basis'] as const;
 /** Column widths in points (landscape A4/Letter, fitted to one page wide). */
-const COLUMN_WIDTHS = [34, 100, 150, 96, 70, 56, 56, 40, 130, 320, 90];
+const COLUMN_WIDTHS = [34, 140, 160, 90, 70, 56, 56, 40, 130, 300, 80];
 /** What, Source and Basis wrap. */
 const WRAPPED = [8, 9, 10];
 

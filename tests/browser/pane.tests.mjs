@@ -704,7 +704,7 @@ export const tests = [
       assert.deepEqual(sheet.zoom, { horizontalFitToPages: 1, verticalFitToPages: 0 });
       assert.match(sheet.printTitleRows, /^\$\d+:\$\d+$/);
       const main = sheet.writes.find((w) => w.values);
-      assert.equal(main.formulas, cases.length * 2 + 7); // a live formula and a check per case; 7 in the header
+      assert.equal(main.formulas, cases.length * 2 + 6); // a live formula and a check per case; 6 in the header
       // The written cells, recalculated outside the browser by the same engine as `cellwright check`
       // (the add-in's functions through the production bundle, the rest through the formula engine).
       const wb = new ExcelJS.Workbook();
@@ -745,8 +745,13 @@ export const tests = [
           return `<td class="${cls}${j >= 8 ? ' wrap' : ''}" title="${esc(v)}">${esc(value)}</td>`;
         }).join('')}</tr>`)
         .join('');
-      await page.setViewportSize({ width: 1400, height: 1000 });
-      await page.setContent(`<style>body{font:11px Calibri,Arial,sans-serif;margin:8px}table{border-collapse:collapse}td{border:1px solid #d0d0d0;padding:1px 4px;vertical-align:top;white-space:nowrap;max-width:260px;overflow:hidden}td.wrap{white-space:normal;min-width:120px}td.pass{background:#e3f1e3;font-weight:bold}td.fail{background:#f6d5d5;font-weight:bold}</style><table>${body}</table>`);
+      await page.setViewportSize({ width: 1400, height: 1600 });
+      await page.goto('about:blank'); // a plain page of our own: the pane's content policy forbids inline styles
+      // column widths as the pane set them (points), so the picture has the printed proportions
+      const px = sheet.writes.filter((w) => typeof w.columnWidth === 'number').map((w) => Math.round(w.columnWidth * 1.1));
+      const widths = px.map((w) => `<col style="width:${w}px">`).join('');
+      const total = px.reduce((a, b) => a + b, 0);
+      await page.setContent(`<style>body{font:10px Calibri,Arial,sans-serif;margin:8px}table{border-collapse:collapse;table-layout:fixed;width:${total}px}td{border:1px solid #d0d0d0;padding:1px 3px;vertical-align:top;white-space:nowrap;overflow:hidden}td.wrap{white-space:normal}td.pass{background:#e3f1e3;font-weight:bold}td.fail{background:#f6d5d5;font-weight:bold}</style><table><colgroup>${widths}</colgroup>${body}</table>`);
       await shot(page, '17-verification-sheet-calculated');
     },
   },
