@@ -257,6 +257,7 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
   const formulaAt = new Map(); // key → formula record (anchors)
   const spillOwner = new Map(); // key → anchor record (cells of an array formula's range)
   const sheetNames = new Map(); // lower-case → name as written
+  const unreadable = new Set(); // keys of formula cells whose text could not be read
   wb.eachSheet((ws) => {
     sheetNames.set(ws.name.toLowerCase(), ws.name);
     ws.eachRow({ includeEmpty: false }, (row, r) => {
@@ -264,8 +265,13 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
         const v = cell.value;
         values.set(key(ws.name, r, c), plain(v));
         if (cell.type !== ExcelJS.ValueType.Formula) return;
-        const text = cell.formula;
-        if (typeof text !== 'string' || text === '') return;
+        let text = cell.formula;
+        if (typeof text !== 'string' || text === '') {
+          // a formula cell whose text cannot be read (e.g. a shared formula the reader cannot translate):
+          // listed as not evaluable, never skipped
+          unreadable.add(key(ws.name, r, c));
+          text = `(shared formula of ${v?.sharedFormula ?? 'an unknown cell'})`;
+        }
         let ref = null;
         if (v && v.shareType === 'array' && typeof v.ref === 'string') {
           const [a, b] = v.ref.split(':').map(parseAddr);
@@ -379,6 +385,11 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
   function evaluate(f) {
     const done = results.get(f);
     if (done) return done;
+    if (unreadable.has(key(f.sheet, f.r, f.c))) {
+      const res = { notEvaluable: 'the formula text could not be read from the file' };
+      results.set(f, res);
+      return res;
+    }
     if (pending.has(f)) return { notEvaluable: 'circular reference' };
     if (depth >= MAX_DEPTH) return { notEvaluable: `its chain of references is deeper than ${MAX_DEPTH} formulas` };
     pending.add(f);
