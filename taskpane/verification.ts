@@ -111,7 +111,7 @@ export function verificationSheet(cases: readonly VerificationCase[], now: Date,
     const r = firstCaseRow + i;
     const check =
       c.tolerance === null
-        ? `=IF(ISERROR(D${r}),"FAIL",IF(D${r}=E${r},"PASS","FAIL"))`
+        ? `=IF(ISERROR(D${r}),"FAIL",IF(EXACT(D${r},E${r}),"PASS","FAIL"))`
         : `=IF(ISNUMBER(D${r}),IF(ABS(D${r}-E${r})<=F${r},"PASS","FAIL"),"FAIL")`;
     const what = `${c.what}${c.tableRow ? ' (a row of the potential table: follows the table in use)' : ''}${c.note ? `. ${c.note}` : ''}`;
     push(
