@@ -166,6 +166,8 @@ export const scenario = {
         { label: 'The same from log10 Ksp = −9.752', formula: '={qa.e0#10}+CELLWRIGHT.EFROMLOGK(-9.752,1)', unit: 'V', digits: 4 },
         { label: 'E°(AgCl/Ag) as stored', formula: '={qa.e0#11}', unit: 'V', digits: 4 },
         { label: 'A key that is not in the table (the error a typo gives)', formula: '=CELLWRIGHT.STDPOTENTIAL("Cu3+/Cu")', expect: '#N/A' },
+        { label: 'Potential table these results come from', formula: '=CELLWRIGHT.TABLEINFO("origin")', note: 'pinned to the workbook, so add-in updates do not change these results' },
+        { label: 'Its checksum (compare with the task pane or another workbook)', formula: '=CELLWRIGHT.TABLEINFO("checksum")' },
       ],
     },
 

@@ -52,7 +52,7 @@ declare global {
 /** Longest reason put into an #N/A message (the whole message stays well under 300 characters). */
 const MAX_REASON = 200;
 
-let details: { revision?: number; checksum?: string } = {};
+let details: { revision?: number; checksum?: string; changedAt?: string } = {};
 /** The stored value the table in use came from (undefined before any was read). */
 let lastValue: unknown = undefined;
 /** Counts changes of the table in use; a start-up load that finishes after a newer change is dropped. */
@@ -79,7 +79,7 @@ export function tableForStoredValue(value: unknown): TableInUse {
     details = {};
     return { kind: 'unreadable', reason: shorten(read.problem.message) };
   }
-  details = { revision: read.copy.revision, checksum: read.checksum };
+  details = { revision: read.copy.revision, checksum: read.checksum, changedAt: read.copy.changedAt };
   return { kind: 'workbook', table: read.table };
 }
 
@@ -101,6 +101,13 @@ export function hostStatus(): FunctionsHostStatus {
     couples: t.table.couples.length,
     electrodes: t.table.electrodes.length,
   };
+}
+
+/** Revision, checksum and change time (ISO 8601) of the table in use, as far as known. */
+export function tableDetails(): { readonly revision?: number; readonly checksum?: string; readonly changedAt?: string } {
+  const t = tableInUse();
+  if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinChecksum(recordsOf(t.table)) };
+  return details;
 }
 
 /** Makes the functions use a stored value now (see the channel above). */

@@ -367,6 +367,7 @@ function main() {
     for (const name of CASES.filter((c) => !ONLY || ONLY.includes(c))) runCase(name, pass);
     if (!ONLY || ONLY.includes('cold-start')) coldStart();
     sizes();
+    if (!ONLY || ONLY.includes('check')) checkSpeed();
     if (JSON_OUT) console.log(JSON.stringify({ date: new Date().toISOString(), node: process.version, cpu, cores, results }, null, 1));
     return;
   }
@@ -761,6 +762,21 @@ function coldStart() {
   } catch (e) {
     console.log(`${'cold-store'.padEnd(18)} failed: ${e.message.split('\n')[0]}`);
   }
+}
+
+/** `cellwright check` on a workbook of 100,000 add-in formulas (scripts/lib/checkbench.mjs, a fresh process). */
+function checkSpeed() {
+  const r = spawnSync(process.execPath, [resolve(ROOT, 'scripts/lib/checkbench.mjs'), '100000'], { encoding: 'utf8' });
+  const line = r.stdout.trim().split('\n').pop() ?? '';
+  if (r.status !== 0 || !line.startsWith('{')) {
+    console.log(`${'check'.padEnd(18)} failed: ${(r.stderr || r.stdout).split('\n').find((l) => l.trim() !== '') ?? r.status}`);
+    return;
+  }
+  const x = JSON.parse(line);
+  results.push({ name: 'check', ...x });
+  console.log(
+    `${'check'.padEnd(18)} cellwright check, ${x.formulas.toLocaleString('en-US')} add-in formulas (reading the file included): ${x.seconds.toFixed(1)} s, ${Math.round(x.formulasPerSecond).toLocaleString('en-US')} formulas per second, ${x.ok ? 'all agree' : 'NOT all agree'}`,
+  );
 }
 
 if (args[0] === '--child') {

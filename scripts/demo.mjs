@@ -6,12 +6,13 @@
 //
 // Builds dist/ first when it is missing or older than the sources (unless --no-build).
 // Exits 1 when a formula gives an error the scenario does not expect.
-import { mkdirSync, readFileSync, statSync } from 'node:fs';
+import { mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { dirname, relative, resolve } from 'node:path';
 import ExcelJS from 'exceljs';
 import { ensureBuilt, loadBundle, ROOT } from './lib/bundle.mjs';
 import { isErrorValue, parseAddress, address } from './lib/formula.mjs';
 import { errorsOf, evaluateSheet, layoutSheet } from './lib/workbook.mjs';
+import { pinnedTableWorkbook } from './lib/demotable.mjs';
 import { scenario } from '../demo/scenario.mjs';
 
 const started = process.hrtime.bigint();
@@ -264,7 +265,10 @@ async function main() {
   const buildNote = argv.includes('--no-build') ? 'dist/ was used as it is (--no-build).' : ensureBuilt({ quiet: QUIET });
   const afterBuild = process.hrtime.bigint();
   const buildSeconds = Number(afterBuild - started) / 1e9;
-  const bundle = loadBundle();
+  // The workbook carries the built-in table pinned in its add-in settings, as Excel stores it; the
+  // functions evaluate with that table in use, read the way the runtime reads it.
+  const pinned = await pinnedTableWorkbook();
+  const bundle = pinned.bundle;
   const version = JSON.parse(readFileSync(resolve(ROOT, 'package.json'), 'utf8')).version;
   out(bold(scenario.title));
   out(dim(`Functions bundle: dist/functions.js, ${bundle.metadata.functions.length} functions, loaded with only a CustomFunctions global. ${buildNote}`));
@@ -290,7 +294,7 @@ async function main() {
   }
 
   mkdirSync(dirname(OUT), { recursive: true });
-  await wb.xlsx.writeFile(OUT);
+  writeFileSync(OUT, await pinned.attach(await wb.xlsx.writeBuffer()));
   const seconds = Number(process.hrtime.bigint() - afterBuild) / 1e9;
   const ids = bundle.metadata.functions.map((f) => f.id);
   const unused = ids.filter((id) => !used.has(id));

@@ -20,6 +20,7 @@ import { type CoupleFields, type ElectrodeFields, checkCoupleForm, checkElectrod
 import { type ActionResult, TableModel } from './model';
 import { copyToSheet } from './sheet';
 import { pollWhileVisible } from './visiblePolling';
+import { wireVerification } from './verification';
 
 const builtin = recordsOf(builtinTable());
 const model = new TableModel({ builtin, host: () => globalThis.cellwrightFunctionsHost });
@@ -877,6 +878,7 @@ function wireFiles(): void {
   byId('import-check').addEventListener('click', runImportCheck);
   byId('import-file').addEventListener('change', () => void readImportFile());
   byId('copy-sheet').addEventListener('click', () => void copySheet());
+  wireVerification();
   byId('import-report').tabIndex = -1;
 }
 

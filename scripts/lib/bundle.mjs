@@ -6,7 +6,7 @@
 // The one loader: used by the demo (scripts/demo.mjs), the reference generator (scripts/docs.mjs)
 // and, through tests/bundle/harness.ts (types in bundle.d.mts), by the test suite. Plain
 // JavaScript so that those scripts run on bare node.
-import { existsSync, readFileSync, statSync, readdirSync } from 'node:fs';
+import { existsSync, readFileSync, statSync, readdirSync, utimesSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { dirname, resolve, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -74,6 +74,10 @@ export function ensureBuilt({ quiet = false } = {}) {
     if (!present) throw new Error(`the production build failed, so there is no bundle to run:\n${tail}`);
     return `The rebuild failed (${tail.split('\n').pop()}), so the previous build in dist/ was used.`;
   }
+  // webpack leaves an output file untouched when its content did not change: mark both as fresh, or
+  // every later run would find them older than the sources and build again
+  const now = new Date();
+  for (const f of [js, json]) utimesSync(f, now, now);
   return present ? 'dist/ was older than the sources, so it was rebuilt.' : 'dist/ had no functions bundle yet, so it was built.';
 }
 

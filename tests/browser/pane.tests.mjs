@@ -12,6 +12,8 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import ExcelJS from 'exceljs';
+import { checkWorkbook } from '../../scripts/lib/check.mjs';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 const couplesFile = JSON.parse(readFileSync(resolve(root, 'data/couples.json'), 'utf8'));
@@ -694,6 +696,74 @@ export const tests = [
       assert.deepEqual(await page.locator('#list-couple .row-key').allInnerTexts(), ['C1999H3998O/C1999H4000O']);
       assert.equal(await cellE0(page, 'C2000H4000O/C2000H4002O'), Number(((2000 % 300) / 100 - 1.5).toFixed(2)));
       await shot(page, '15-two-thousand-rows-filtered', '.tabs');
+    },
+  },
+  {
+    name: 'verification sheet: one row per published case with live formulas, every case PASS with the built-in table, printed one page wide',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#tab-files');
+      await page.click('#write-verification');
+      await page.waitForFunction(() => /Wrote the sheet/.test(document.getElementById('verification-status')?.textContent ?? ''));
+      const cases = JSON.parse(readFileSync(resolve(root, 'data/verification.json'), 'utf8')).cases;
+      assert.match(await text(page, '#verification-status'), new RegExp(`Wrote the sheet “Verification” with ${cases.length} cases`));
+      await fitsWidth(page);
+      await shot(page, '16-verification-written', '#write-verification');
+      const sheet = (await page.evaluate(() => window.__stubWorkbook.file().sheets)).Verification;
+      assert.ok(sheet.active);
+      assert.equal(sheet.orientation, 'Landscape');
+      assert.deepEqual(sheet.zoom, { horizontalFitToPages: 1, verticalFitToPages: 0 });
+      assert.match(sheet.printTitleRows, /^\$\d+:\$\d+$/);
+      const main = sheet.writes.find((w) => w.values);
+      assert.equal(main.formulas, cases.length * 2 + 6); // a live formula and a check per case; 6 in the header
+      // The written cells, recalculated outside the browser by the same engine as `cellwright check`
+      // (the add-in's functions through the production bundle, the rest through the formula engine).
+      const wb = new ExcelJS.Workbook();
+      const ws = wb.addWorksheet('Verification');
+      main.values.forEach((row, i) =>
+        row.forEach((v, j) => {
+          if (v === '') return;
+          const cell = ws.getCell(i + 1, j + 1);
+          cell.value = typeof v === 'string' && v.startsWith('=') && main.numberFormat[i][j] !== '@' ? { formula: v.slice(1) } : v;
+        }),
+      );
+      const report = await checkWorkbook(Buffer.from(await wb.xlsx.writeBuffer()), { collect: true });
+      assert.deepEqual(report.notEvaluable, []);
+      const at = (a) => report.values.get(`Verification!${a}`);
+      const header = main.values.findIndex((r) => r[0] === 'Case');
+      const rows = [];
+      for (let i = header + 1; i < main.values.length; i++) {
+        const r = i + 1;
+        rows.push({ id: main.values[i][0], result: at(`D${r}`), check: at(`H${r}`) });
+      }
+      assert.equal(rows.length, cases.length);
+      for (const r of rows) assert.equal(r.check, 'PASS', `${r.id}: ${JSON.stringify(r.result)}`);
+      const label = (name) => at(`C${main.values.findIndex((r) => r[1] === name) + 1}`);
+      assert.equal(label('Result'), `PASS: all ${cases.length} cases`);
+      assert.equal(label('Potential table'), 'built-in');
+      assert.equal(label('Table version'), BUILTIN_VERSION);
+      assert.match(label('Table checksum'), /^sha256:[0-9a-f]{64}$/);
+      assert.equal(label('Add-in version'), JSON.parse(readFileSync(resolve(root, 'package.json'), 'utf8')).version);
+      assert.equal(label('Table changed'), 'not stored (the built-in table)');
+      // A picture of the sheet as written and calculated (the stub has no grid of its own to show).
+      const esc = (x) => String(x).replace(/&/g, '&amp;').replace(/</g, '&lt;');
+      const shown = (v) => (v === null || v === undefined ? '' : typeof v === 'object' && 'error' in v ? v.error : typeof v === 'number' ? String(Number(v.toPrecision(10))) : String(v));
+      const body = main.values
+        .map((row, i) => `<tr>${row.map((v, j) => {
+          const isFormula = typeof v === 'string' && v.startsWith('=') && main.numberFormat[i][j] !== '@';
+          const value = isFormula ? shown(at(`${String.fromCharCode(65 + j)}${i + 1}`)) : shown(v);
+          const cls = value === 'PASS' || /^PASS:/.test(value) ? 'pass' : value === 'FAIL' ? 'fail' : '';
+          return `<td class="${cls}${j >= 8 ? ' wrap' : ''}" title="${esc(v)}">${esc(value)}</td>`;
+        }).join('')}</tr>`)
+        .join('');
+      await page.setViewportSize({ width: 1400, height: 1600 });
+      await page.goto('about:blank'); // a plain page of our own: the pane's content policy forbids inline styles
+      // column widths as the pane set them (points), so the picture has the printed proportions
+      const px = sheet.writes.filter((w) => typeof w.columnWidth === 'number').map((w) => Math.round(w.columnWidth * 1.1));
+      const widths = px.map((w) => `<col style="width:${w}px">`).join('');
+      const total = px.reduce((a, b) => a + b, 0);
+      await page.setContent(`<style>body{font:10px Calibri,Arial,sans-serif;margin:8px}table{border-collapse:collapse;table-layout:fixed;width:${total}px}td{border:1px solid #d0d0d0;padding:1px 3px;vertical-align:top;white-space:nowrap;overflow:hidden}td.wrap{white-space:normal}td.pass{background:#e3f1e3;font-weight:bold}td.fail{background:#f6d5d5;font-weight:bold}</style><table><colgroup>${widths}</colgroup>${body}</table>`);
+      await shot(page, '17-verification-sheet-calculated');
     },
   },
 ];

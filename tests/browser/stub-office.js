@@ -8,7 +8,8 @@
  *                             onSettingsChanged.add(handler)
  *     workbook.application    calculate(type)
  *     workbook.worksheets     load("items/name"), items, add(name) → sheet.getRange(address) with
- *                             numberFormat / values / format.font.bold / format.columnWidth / format.wrapText,
+ *                             numberFormat / values / formulas / format.font.bold / format.columnWidth /
+ *                             format.wrapText, sheet.pageLayout (orientation, zoom, setPrintTitleRows),
  *                             sheet.activate()
  *   and context.sync(). Queued writes take effect at sync; loaded values can be read only after sync.
  *   CustomFunctions.associate / Error / ErrorCode, so functions.js registers its functions here.
@@ -99,6 +100,16 @@
                 });
               });
             }
+            if (range.formulas) {
+              // Range.formulas: a text starting with "=" is a formula, anything else a constant
+              write.values = range.formulas;
+              write.formulas = 0;
+              range.formulas.forEach(function (row) {
+                row.forEach(function (v) {
+                  if (typeof v === 'string' && v.charAt(0) === '=') write.formulas++;
+                });
+              });
+            }
             if (range.format.font.bold === true) write.bold = true;
             if (typeof range.format.columnWidth === 'number') write.columnWidth = range.format.columnWidth;
             if (range.format.wrapText === true) write.wrapText = true;
@@ -106,6 +117,25 @@
           });
           return range;
         },
+        pageLayout: (function () {
+          var layout = {
+            setPrintTitleRows: function (rows) {
+              queue.push(function () {
+                file.sheets[name].printTitleRows = rows;
+              });
+            },
+          };
+          ['orientation', 'zoom'].forEach(function (prop) {
+            Object.defineProperty(layout, prop, {
+              set: function (v) {
+                queue.push(function () {
+                  file.sheets[name][prop] = JSON.parse(JSON.stringify(v));
+                });
+              },
+            });
+          });
+          return layout;
+        })(),
         activate: function () {
           queue.push(function () {
             Object.keys(file.sheets).forEach(function (n) {

@@ -5,13 +5,15 @@
  * harness, independently of the demo's loader).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, rmSync } from 'node:fs';
+import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { resolve } from 'node:path';
 import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { scenario } from '../../demo/scenario.mjs';
 import { cellwrightCalls, evaluate, isErrorValue, parseAddress, parseFormula, unwrap } from '../../scripts/lib/formula.mjs';
 import type { Scalar, Value } from '../../scripts/lib/formula.mjs';
+import { loadBundleWithTable } from '../../scripts/lib/tablehost.mjs';
+import { TABLE_SETTING_KEY, readSetting } from '../../scripts/lib/webextension.mjs';
 import { layoutSheet } from '../../scripts/lib/workbook.mjs';
 import { loadBundle, type LoadedBundle } from '../bundle/harness';
 
@@ -79,8 +81,10 @@ beforeAll(async () => {
   run = { status: r.status, stdout: r.stdout, stderr: r.stderr, ms: Date.now() - t0 };
   wb = new ExcelJS.Workbook();
   if (existsSync(XLSX)) await wb.xlsx.readFile(XLSX);
-  bundle = loadBundle();
-}, 60_000); // the demo runs in a child process: allow for a machine busy with the rest of the suite
+  // the functions with the table the workbook carries in its add-in settings (the pinned built-in table)
+  const setting = existsSync(XLSX) ? await readSetting(readFileSync(XLSX), TABLE_SETTING_KEY) : { found: false as const };
+  bundle = setting.found ? (await loadBundleWithTable(setting.value)).bundle : loadBundle();
+}, 60_000);
 
 describe('npm run demo', () => {
   it('runs in seconds without an unexpected error and prints every sheet', () => {

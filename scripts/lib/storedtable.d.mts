@@ -1,0 +1,3 @@
+export function pinnedStoredText(changedAt?: string): Promise<string>;
+export function changedStoredText(text: string, change: unknown, changedAt?: string): Promise<string>;
+export function storedTextFromCsv(csvText: string, changedAt?: string): Promise<string>;
