@@ -16,10 +16,11 @@ describe('galvanic', () => {
   });
 
   it('uses E° at the temperature', () => {
-    // E°(T) from Bratsch 1989 dE°/dT (from memory): Cu2+/Cu +0.011, Zn2+/Zn +0.119 mV/K
+    // E°(T) from the species data (NBS 1982, with ΔrCp for zinc); Bratsch 1989's linear dE°/dT
+    // (Cu2+/Cu +0.011, Zn2+/Zn +0.119 mV/K) agrees within 1 mV at 65 °C
     const [e] = galvanic(cu, zn, 65);
-    expect(e).toBeCloseTo(1.1037 + (0.011 - 0.119) * 1e-3 * 40, 10);
-    expect(() => galvanic(cu, t.findCouple('Cd2+/Cd')!, 65)).toThrow(NotFoundError);
+    expect(Math.abs(e - (1.1037 + (0.011 - 0.119) * 1e-3 * 40))).toBeLessThan(1e-3);
+    expect(() => galvanic(cu, t.findCouple('Au3+/Au')!, 65)).toThrow(NotFoundError);
     expect(() => galvanic(cu, zn, 120)).toThrow(DomainError);
   });
 
