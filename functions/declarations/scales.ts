@@ -22,14 +22,14 @@ function refPotential(electrode: any[][], temperature_C?: any[][]): any[][] {
 }
 
 /**
- * The same potential on another scale, in V: "SHE", "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table.
+ * The same potential on another scale, in V: "SHE" (or "NHE"), "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table. The reference electrode is assumed to be at the stated temperature (its potential at that temperature is used). Compare a reading with the criterion a standard states for the electrode used, not with a converted one.
  * @customfunction CONVERTPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#convertpotential
  * @param potential_V Potential on the from_scale, in V.
- * @param from_scale Scale the potential is given on: "SHE", "RHE" or an electrode key such as "CSE" or "SCE".
+ * @param from_scale Scale the potential is given on: "SHE" (or "NHE"), "RHE" or an electrode key such as "CSE" or "SCE".
  * @param to_scale Scale wanted: "SHE", "RHE" or an electrode key.
  * @param [pH] pH of the solution, needed when either scale is "RHE" (no default).
- * @param [temperature_C] Temperature in °C (default 25).
+ * @param [temperature_C] Temperature in °C of the solution and of the reference electrode (default 25).
  * @returns Potential in V on the to_scale.
  */
 function convertPotential(potential_V: any[][], from_scale: any[][], to_scale: any[][], pH?: any[][], temperature_C?: any[][]): any[][] {
