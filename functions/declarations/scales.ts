@@ -10,11 +10,11 @@
 import * as F from '../families/scales';
 
 /**
- * Potential of a reference electrode vs SHE, in V, from the electrode table; at another temperature E(25 °C) + (dE/dT)·(T − 25).
+ * Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table's dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction from the species data with the filling's activity held constant. Compare a reading with the criterion a standard states for the electrode used, not with a converted one.
  * @customfunction REFPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#refpotential
  * @param electrode Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).
- * @param [temperature_C] Temperature in °C (default 25; 0 to 100, and only where the table has dE/dT).
+ * @param [temperature_C] Temperature in °C of the electrode (default 25; 0 to 100; saturated and field electrodes without dE/dT answer #N/A away from 25 °C).
  * @returns Potential in V vs SHE.
  */
 function refPotential(electrode: any[][], temperature_C?: any[][]): any[][] {

@@ -40,11 +40,11 @@ describe('reference scales', () => {
     expect(one(await run('REFPOTENTIAL', 'SCE'))).toBe(0.2412); // Bard & Faulkner, inside back cover
     expect(one(await run('REFPOTENTIAL', [[' ag/agcl/kcl (SAT) ']]))).toBe(0.197); // Bard & Faulkner, inside back cover
   });
-  it('REFPOTENTIAL errors: unknown electrode #N/A naming it; no dE/dT away from 25 °C #N/A; 150 °C #NUM!', async () => {
+  it('REFPOTENTIAL errors: unknown electrode #N/A naming it; no dE/dT nor fixed filling away from 25 °C #N/A; 150 °C #NUM!', async () => {
     const unknown = one(await run('REFPOTENTIAL', 'Pt/PtO'));
     expect(isError(unknown, '#N/A')).toBe(true);
     expect((unknown as FakeError).message).toMatch(/Pt\/PtO/);
-    const noSlope = one(await run('REFPOTENTIAL', 'Ag/AgCl/KCl(3M)', 40));
+    const noSlope = one(await run('REFPOTENTIAL', 'Ag/AgCl/seawater', 40));
     expect(isError(noSlope, '#N/A')).toBe(true);
     expect((noSlope as FakeError).message).toMatch(/dE\/dT/);
     expect(isError(one(await run('REFPOTENTIAL', 'SCE', 150)), '#NUM!')).toBe(true);

@@ -58,8 +58,8 @@ describe('convertPotential: rules', () => {
     expect(conv(0.123, 'Ag/AgCl/KCl(3M)', 'Ag/AgCl/KCl(3 mol/L)', null, 60)).toBe(0.123);
     expect(conv(0.123, 'RHE', 'RHE')).toBe(0.123);
   });
-  it('electrodes without dE/dT cannot be converted away from 25 °C', () => {
-    expect(() => conv(0.1, 'Ag/AgCl/KCl(3M)', 'SHE', null, 40)).toThrow(NotFoundError);
+  it('electrodes with neither dE/dT nor a fixed filling cannot be converted away from 25 °C', () => {
+    expect(() => conv(0.1, 'SSCE', 'SHE', null, 40)).toThrow(NotFoundError);
   });
 });
 
