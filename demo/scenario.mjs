@@ -156,6 +156,7 @@ export const scenario = {
           { key: 'n', header: 'n', formula: '=CELLWRIGHT.ELECTRONS({qa.key})' },
           { key: 'hr', header: 'Half-reaction', formula: '=CELLWRIGHT.HALFREACTION({qa.key})' },
           { key: 'src', header: 'Source', formula: '=CELLWRIGHT.SOURCE({qa.key})' },
+          { key: 'basis', header: 'E° at temperature from', formula: '=CELLWRIGHT.E0BASIS({qa.key})' },
         ] },
         { section: 'QA: consistency checks on the table' },
         { key: 'cuComb', label: 'E°(Cu²⁺/Cu) from Cu²⁺/Cu⁺ and Cu⁺/Cu (adding free energies)', formula: '=CELLWRIGHT.COMBINE({qa.e0#2}:{qa.e0#3},{qa.n#2}:{qa.n#3})', unit: 'V', digits: 4 },

@@ -76,3 +76,14 @@ describe('ELECTROWINVOLTAGE and ELECTROWINTHERMONEUTRAL', () => {
     expect(isError(one(await call('ELECTROWINTHERMONEUTRAL', 'water')), '#N/A')).toBe(true);
   });
 });
+
+describe('E0BASIS', () => {
+  it('names the basis of each couple; an unknown couple is #N/A', async () => {
+    const r = await call('E0BASIS', [['O2/H2O'], ['Cu2+/Cu'], ['Au3+/Au'], ['bogus']]);
+    // O2/H2O: every species has Cp° in the NBS 1982 tables; Cu2+ has none; Au3+ is not tabulated
+    expect(r[0][0]).toBe('species (with ΔrCp)');
+    expect(r[1][0]).toBe('species (ΔrCp = 0)');
+    expect(r[2][0]).toBe('25 °C only');
+    expect(isError(r[3][0], '#N/A')).toBe(true);
+  });
+});
