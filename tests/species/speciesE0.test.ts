@@ -140,6 +140,15 @@ describe('consistency report of the built-in table', () => {
     // (1·0.771 + 2·(−0.447))/3 = −0.0410 V from the rows themselves
     expect(fe.derivedV).toBeCloseTo((0.771 - 2 * 0.447) / 3, 12);
   });
+  it('links the dichromate and hydrogen-chromate rows through the species that differ (ΔfG° of Cr2O7^2-, HCrO4-, H2O)', () => {
+    const link = report.filter((l) => l.kind === 'link');
+    expect(link.map((l) => l.keys.join(' ~ '))).toEqual(['Cr2O7^2-/Cr3+ ~ HCrO4-/Cr3+']);
+    // per electron: ΔG°/6 of Cr2O7^2- + 14H+ → 2Cr3+ + 7H2O minus ΔG°/3 of HCrO4- + 7H+ → Cr3+ + 4H2O
+    // (Cr3+ and H+ cancel): [−7·237.129 + 1301.1]/6 − [−4·237.129 + 764.7]/3 kJ/mol (NBS 1982)
+    const g = ((-7 * 237129 + 1301100) / 6 - (-4 * 237129 + 764700) / 3);
+    expect(link[0].derivedV).toBeCloseTo(1.35 - g / F, 12);
+    expect(link[0].note).toMatch(/0.1 V lower/);
+  });
   it('flags a row changed in a workbook’s copy', () => {
     const edited = { ...t, couples: t.couples.map((r) => (r.key === 'Cu2+/Cu' ? { ...r, e0: 0.4 } : r)) };
     const line = consistencyReport(edited).find((l) => l.kind === 'species' && l.keys[0] === 'Cu2+/Cu')!;
@@ -148,6 +157,6 @@ describe('consistency report of the built-in table', () => {
   });
   it('notes on file name only rows of the table', () => {
     const keys = new Set(t.couples.map((r) => r.key));
-    for (const k of Object.keys(consistency.notes)) for (const part of k.split(/ = | \+ /)) expect(keys.has(part), part).toBe(true);
+    for (const k of Object.keys(consistency.notes)) for (const part of k.split(/ = | \+ | ~ /)) expect(keys.has(part), part).toBe(true);
   });
 });
