@@ -156,6 +156,7 @@ export const scenario = {
           { key: 'n', header: 'n', formula: '=CELLWRIGHT.ELECTRONS({qa.key})' },
           { key: 'hr', header: 'Half-reaction', formula: '=CELLWRIGHT.HALFREACTION({qa.key})' },
           { key: 'src', header: 'Source', formula: '=CELLWRIGHT.SOURCE({qa.key})' },
+          { key: 'basis', header: 'E° at temperature from', formula: '=CELLWRIGHT.E0BASIS({qa.key})' },
         ] },
         { section: 'QA: consistency checks on the table' },
         { key: 'cuComb', label: 'E°(Cu²⁺/Cu) from Cu²⁺/Cu⁺ and Cu⁺/Cu (adding free energies)', formula: '=CELLWRIGHT.COMBINE({qa.e0#2}:{qa.e0#3},{qa.n#2}:{qa.n#3})', unit: 'V', digits: 4 },
@@ -307,6 +308,17 @@ export const scenario = {
           { key: 'urev', header: 'Reversible voltage', unit: 'V', formula: '=-CELLWRIGHT.EFROMTHERMO({dH},{dS},2,{tv.T})', digits: 4 },
           { key: 'g', header: 'ΔG', unit: 'kJ/mol', formula: '=CELLWRIGHT.DELTAG(-{tv.urev},2)', digits: 2 },
         ] },
+
+        { section: 'At conditions, from the species data (ΔH and ΔS follow the temperature)' },
+        { table: 'tc', caption: 'Reversible and thermoneutral voltage, pure water, 1 bar', columns: [
+          { key: 'T', header: 'Temperature', unit: '°C', values: [25, 40, 60, 80, 90] },
+          { key: 'urev', header: 'Reversible voltage', unit: 'V', formula: '=CELLWRIGHT.WATERSPLITVOLTAGE({tc.T})', digits: 4 },
+          { key: 'utn', header: 'Thermoneutral voltage', unit: 'V', formula: '=CELLWRIGHT.WATERTHERMONEUTRAL({tc.T})', digits: 4 },
+        ] },
+        { label: 'Reversible voltage at 80 °C, 30 bar, lye water activity 0.7', formula: '=CELLWRIGHT.WATERSPLITVOLTAGE(80,30,0.7)', unit: 'V', digits: 4, note: 'water activity of the lye: an invented figure for the demo' },
+        { label: 'For comparison: zinc electrowinning decomposition voltage, 38 °C', formula: '=CELLWRIGHT.ELECTROWINVOLTAGE("Zn",38,0.3,0.5,0.21,0.9)', unit: 'V', digits: 4, note: 'invented tankhouse activities' },
+        { label: 'For comparison: zinc electrowinning thermoneutral voltage, 38 °C', formula: '=CELLWRIGHT.ELECTROWINTHERMONEUTRAL("Zn",38)', unit: 'V', digits: 4 },
+
 
         { section: 'Stack operation (test run 7, invented log)' },
         { key: 'cells', label: 'Cells in the stack', value: 20 },

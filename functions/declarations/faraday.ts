@@ -10,7 +10,7 @@
 import * as F from '../families/faraday';
 
 /**
- * Molar mass of a formula in g/mol from IUPAC standard atomic weights; parentheses, square brackets and hydrate dots (·, * or .) understood.
+ * Molar mass of a formula in g/mol from IUPAC standard atomic weights, summed exactly in decimal; parentheses, square brackets and hydrate dots (·, * or .) understood. A space is read only as a hydrate dot before a number ("CuSO4 5H2O" = "CuSO4·5H2O"); any other space inside a formula is #VALUE!.
  * @customfunction MOLARMASS
  * @helpurl https://localhost:3000/docs/functions.html#molarmass
  * @param formula Chemical formula, e.g. "NiSO4·6H2O" or "K3[Fe(CN)6]" (element symbols are case-sensitive).

@@ -22,11 +22,11 @@ function ionicStrength(molalities: any[][], charges: any[][]): any[][] {
 }
 
 /**
- * Single-ion activity coefficient by "DHLL" (limiting law), "EDH" (extended Debye–Hückel, needs the ion size in Å) or "DAVIES"; A and B follow temperature (0 to 100 °C).
+ * Single-ion activity coefficient by "DHLL" (limiting law, I up to 0.005 mol/kg), "EDH" (extended Debye–Hückel, needs the ion size in Å; I up to 0.1) or "DAVIES" (I up to 0.5); beyond its range a model answers #VALUE!. A and B follow temperature (0 to 100 °C).
  * @customfunction ACTIVITYCOEF
  * @helpurl https://localhost:3000/docs/functions.html#activitycoef
  * @param charge Charge number of the ion (a whole number).
- * @param ionic_strength Ionic strength, in mol/kg.
+ * @param ionic_strength Ionic strength, in mol/kg (within the model's range).
  * @param [model] "DHLL", "EDH" or "DAVIES" (default "DAVIES").
  * @param [temperature_C] Temperature in °C (default 25).
  * @param [ion_size_A] Ion size parameter, in Å (required by "EDH", ignored otherwise).
@@ -37,12 +37,12 @@ function activityCoef(charge: any[][], ionic_strength: any[][], model?: any[][],
 }
 
 /**
- * Mean ionic activity coefficient of a salt by "DHLL", "EDH" (needs the ion size in Å) or "DAVIES"; A and B follow temperature (0 to 100 °C).
+ * Mean ionic activity coefficient of a salt by "DHLL" (I up to 0.005 mol/kg), "EDH" (needs the ion size in Å; I up to 0.1) or "DAVIES" (I up to 0.5); beyond its range a model answers #VALUE!. A and B follow temperature (0 to 100 °C).
  * @customfunction MEANACTIVITYCOEF
  * @helpurl https://localhost:3000/docs/functions.html#meanactivitycoef
  * @param z_cation Charge of the cation (a whole number; only its magnitude counts).
  * @param z_anion Charge of the anion (a whole number; only its magnitude counts).
- * @param ionic_strength Ionic strength, in mol/kg.
+ * @param ionic_strength Ionic strength, in mol/kg (within the model's range).
  * @param [model] "DHLL", "EDH" or "DAVIES" (default "DAVIES").
  * @param [temperature_C] Temperature in °C (default 25).
  * @param [ion_size_A] Mean ion size parameter, in Å (required by "EDH", ignored otherwise).

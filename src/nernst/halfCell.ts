@@ -3,7 +3,8 @@ import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, LN10, kelvin } from '../co
 import { DomainError } from '../errors';
 import { e0AtTemperature } from '../cells/e0AtTemperature';
 import type { CoupleRow } from '../table/types';
-import { waterPKw } from './waterPKw';
+import { speciesPKw } from '../species/speciesPKw';
+import type { HalfReaction } from '../chem/halfReaction';
 
 /**
  * Reduction potential of a half-cell vs SHE at given activities, pH and temperature, from the
@@ -11,7 +12,7 @@ import { waterPKw } from './waterPKw';
  *
  * - oxActivity applies to every dissolved or gaseous species on the oxidized side except H+, OH-
  *   and H2O; redActivity likewise on the reduced side; each is raised to its coefficient.
- * - H+ has activity 10^−pH; OH- has Kw(T)/a_H+ (pKw from waterPKw). pH null → both 1.
+ * - H+ has activity 10^−pH; OH- has Kw(T)/a_H+ (pKw from speciesPKw, the same species data as E°(T), so acid and alkaline forms agree). pH null → both 1.
  * - Solids, liquids, water and electrons have activity 1. (A gas's activity is its partial
  *   pressure in bar.)
  *
@@ -74,6 +75,7 @@ interface HalfCellPlan {
   readonly key: string;
   readonly e0: number;
   readonly dEdT_mV_K: number | undefined;
+  readonly parsed: HalfReaction;
   readonly n: number;
   /** Σ ν of the dissolved and gaseous species on the oxidized side (each enters ln Q as −ν·ln a_ox). */
   readonly nuOx: number;
@@ -138,7 +140,7 @@ function compilePlan(row: CoupleRow): HalfCellPlan {
         break;
     }
   }
-  return { key: row.key, e0: row.e0, dEdT_mV_K: row.dEdT_mV_K, n: row.n, nuOx, nuRed, nuH, nuOH, usesOx, usesRed, usesH, usesOH };
+  return { key: row.key, e0: row.e0, dEdT_mV_K: row.dEdT_mV_K, parsed: row.parsed, n: row.n, nuOx, nuRed, nuH, nuOH, usesOx, usesRed, usesH, usesOH };
 }
 
 /** pKw at the temperature last asked for (halfCell over a range asks at one temperature). */
@@ -147,7 +149,7 @@ let lastPKw = NaN;
 
 function pKwAt(temperatureC: number): number {
   if (temperatureC !== lastKwTemperatureC) {
-    lastPKw = waterPKw(temperatureC);
+    lastPKw = speciesPKw(temperatureC);
     lastKwTemperatureC = temperatureC;
   }
   return lastPKw;

@@ -5,7 +5,8 @@ import type { ElectrodeRow } from '../table/types';
 export type Scale = { readonly kind: 'SHE' } | { readonly kind: 'RHE' } | { readonly kind: 'electrode'; readonly row: ElectrodeRow };
 
 /**
- * Reads a scale name: "SHE" and "RHE" (any case, white space ignored), otherwise a key or alias of
+ * Reads a scale name: "SHE" (also "NHE", the normal hydrogen electrode, read as the same scale) and
+ * "RHE" (any case, white space ignored), otherwise a key or alias of
  * the electrode table found by `findElectrode`. Unknown names throw NotFoundError naming them.
  *
  * Syntax: resolveScale(name, findElectrode)
@@ -14,12 +15,12 @@ export type Scale = { readonly kind: 'SHE' } | { readonly kind: 'RHE' } | { read
  */
 export function resolveScale(name: string, findElectrode: (key: string) => ElectrodeRow | undefined): Scale {
   const bare = name.replace(/\s+/g, '').toUpperCase();
-  if (bare === 'SHE') return { kind: 'SHE' };
+  if (bare === 'SHE' || bare === 'NHE') return { kind: 'SHE' };
   if (bare === 'RHE') return { kind: 'RHE' };
   const row = findElectrode(name);
   if (row === undefined) {
     const shown = name.length > 40 ? `${name.slice(0, 37)}…` : name;
-    throw new NotFoundError(`unknown scale "${shown}"; use "SHE", "RHE" or a reference electrode of the table such as "SCE" or "CSE"`);
+    throw new NotFoundError(`unknown scale "${shown}"; use "SHE" (or "NHE"), "RHE" or a reference electrode of the table such as "SCE" or "CSE"`);
   }
   return { kind: 'electrode', row };
 }

@@ -82,3 +82,24 @@ describe('molarMass is additive over formula parts (property)', () => {
     );
   });
 });
+
+describe('molarMass: spaces and exact decimal sums', () => {
+  // IUPAC/CIAAW 2021 abridged standard atomic weights as in data/atomic-weights.json:
+  // Cu 63.546, S 32.06, O 15.999, H 1.008, Na 22.990
+  it('sums in decimal: CuSO4·5H2O is exactly 249.677 (63.546 + 32.06 + 9·15.999 + 10·1.008)', () => {
+    expect(molarMass('CuSO4·5H2O')).toBe(249.677);
+    expect(molarMass('H2O')).toBe(18.015);
+  });
+  it('a space before a multiplied formula is a hydrate separator', () => {
+    expect(molarMass('CuSO4 5H2O')).toBe(molarMass('CuSO4·5H2O'));
+    expect(molarMass('Na2SO4 10H2O')).toBe(molarMass('Na2SO4·10H2O'));
+    expect(molarMass('CaSO4  0.5H2O')).toBe(molarMass('CaSO4·0.5H2O'));
+    expect(molarMass('  NiSO4·6H2O ')).toBe(molarMass('NiSO4·6H2O'));
+  });
+  it('any other space inside a formula is an input error naming the rule, never a silent change', () => {
+    for (const f of ['Cu SO4', 'CuSO4 H2O', 'SO4 2-', 'CuSO4 5 H2O']) {
+      expect(() => molarMass(f), f).toThrow(InputError);
+      expect(() => molarMass(f), f).toThrow(/hydrate separator before a number/);
+    }
+  });
+});

@@ -51,12 +51,15 @@ describe('halfCell: handbook checks', () => {
   });
 
   it('uses E°(T) and RT/nF at the temperature', () => {
-    // Cu2+/Cu at 50 °C, a = 0.01: E°(50) = 0.3372 − 0.002e-3·25 (data/couples.json (Thermoddem V1.10, computed from the cited log K), dE°/dT from the cited ΔrH)
+    // Cu2+/Cu at 50 °C, a = 0.01: E°(50) = 0.3372 + 25·ΔrS/2F with ΔrS = 33.150 + 99.6 − 130.684 J/(mol·K)
+    // (NBS 1982; Cu2+ has no Cp°, so ΔrCp = 0). Bratsch 1989's +0.011 mV/K is the same slope.
     const e = halfCell(row('Cu2+/Cu'), 0.01, null, null, 50);
     const slope = (GAS_CONSTANT_J_PER_MOL_K * 323.15) / (2 * FARADAY_C_PER_MOL);
-    expect(e).toBeCloseTo(0.3372 - 0.002e-3 * 25 - slope * Math.log(100), 9);
-    // O2/H2O at 80 °C and pH 0: the E°(T) of the reversible oxygen electrode, 1.2292 − 0.845e-3·55 V
-    expect(halfCell(row('O2/H2O'), 1, null, 0, 80)).toBeCloseTo(1.2292 - 0.845e-3 * 55, 9);
+    expect(e).toBeCloseTo(0.3372 + (25 * (33.15 + 99.6 - 130.684)) / (2 * FARADAY_C_PER_MOL) - slope * Math.log(100), 9);
+    // O2/H2O at 80 °C and pH 0: the E°(T) of the reversible oxygen electrode; the row's linear (Thermoddem V1.10)
+    // 1.2292 − 0.845e-3·55 V agrees within 1 mV
+    expect(halfCell(row('O2/H2O'), 1, null, 0, 80)).toBeCloseTo(e0AtTemperature(row('O2/H2O'), 80), 12);
+    expect(Math.abs(halfCell(row('O2/H2O'), 1, null, 0, 80) - (1.2292 - 0.845e-3 * 55))).toBeLessThan(1e-3);
   });
 });
 

@@ -58,8 +58,8 @@ describe('convertPotential: rules', () => {
     expect(conv(0.123, 'Ag/AgCl/KCl(3M)', 'Ag/AgCl/KCl(3 mol/L)', null, 60)).toBe(0.123);
     expect(conv(0.123, 'RHE', 'RHE')).toBe(0.123);
   });
-  it('electrodes without dE/dT cannot be converted away from 25 °C', () => {
-    expect(() => conv(0.1, 'Ag/AgCl/KCl(3M)', 'SHE', null, 40)).toThrow(NotFoundError);
+  it('electrodes with neither dE/dT nor a fixed filling cannot be converted away from 25 °C', () => {
+    expect(() => conv(0.1, 'SSCE', 'SHE', null, 40)).toThrow(NotFoundError);
   });
 });
 
@@ -89,5 +89,15 @@ describe('convertPotential: there and back is the identity (property)', () => {
         expect(conv(conv(e, a, 'SHE', 7), 'SHE', b, 7)).toBeCloseTo(conv(e, a, b, 7), 12);
       }),
     );
+  });
+});
+
+describe('NHE is a name of the SHE scale', () => {
+  it('converts the same as SHE (common practice: the normal hydrogen electrode is used as a name of the standard one)', () => {
+    const t = builtinTable();
+    expect(convertPotential(0.5, resolveScale('NHE', t.findElectrode), resolveScale('SCE', t.findElectrode), null, 25)).toBe(
+      convertPotential(0.5, resolveScale('SHE', t.findElectrode), resolveScale('SCE', t.findElectrode), null, 25),
+    );
+    expect(resolveScale(' nhe ', t.findElectrode)).toEqual({ kind: 'SHE' });
   });
 });

@@ -26,7 +26,7 @@ describe('activityCoef: extended Debye–Hückel against Kielland’s table', ()
 
 describe('activityCoef: models and rules', () => {
   it('a neutral species has γ = 1 in every model', () => {
-    for (const m of ['DHLL', 'EDH', 'DAVIES']) expect(activityCoef(0, 0.5, m, 25, 4)).toBe(1);
+    for (const m of ['DHLL', 'EDH', 'DAVIES']) expect(activityCoef(0, 0.004, m, 25, 4)).toBe(1);
   });
   it('γ = 1 at zero ionic strength', () => {
     for (const m of ['DHLL', 'EDH', 'DAVIES']) expect(activityCoef(2, 0, m, 25, 4)).toBe(1);
@@ -46,9 +46,19 @@ describe('activityCoef: models and rules', () => {
       }),
     );
   });
-  it('… and part at high ionic strength, where the limiting law falls far below the others', () => {
-    expect(activityCoef(1, 1, 'DHLL', 25, null)).toBeLessThan(0.5 * activityCoef(1, 1, 'DAVIES', 25, null));
-    expect(activityCoef(1, 1, 'DHLL', 25, null)).toBeLessThan(0.6 * activityCoef(1, 1, 'EDH', 25, 4));
+  it('… and part with ionic strength, where the limiting law falls below the others', () => {
+    expect(activityCoef(2, 0.005, 'DHLL', 25, null)).toBeLessThan(activityCoef(2, 0.005, 'DAVIES', 25, null));
+    expect(activityCoef(2, 0.005, 'DHLL', 25, null)).toBeLessThan(activityCoef(2, 0.005, 'EDH', 25, 4));
+  });
+  it('each model answers only within its ionic-strength range (DHLL 0.005, EDH 0.1, DAVIES 0.5 mol/kg), else an input error naming it', () => {
+    // the Davies equation would give γ = 53 for z = 2 at I = 5.13 mol/kg: never a number out there
+    expect(() => activityCoef(2, 5.13, 'DAVIES', 25, null)).toThrow(InputError);
+    expect(() => activityCoef(2, 5.13, 'DAVIES', 25, null)).toThrow(/from 0 to 0.5 mol\/kg/);
+    expect(() => activityCoef(1, 0.0051, 'DHLL', 25, null)).toThrow(/from 0 to 0.005 mol\/kg/);
+    expect(() => activityCoef(1, 0.11, 'EDH', 25, 4)).toThrow(/from 0 to 0.1 mol\/kg/);
+    expect(activityCoef(1, 0.5, 'DAVIES', 25, null)).toBeGreaterThan(0);
+    expect(activityCoef(1, 0.1, 'EDH', 25, 4)).toBeGreaterThan(0);
+    expect(activityCoef(1, 0.005, 'DHLL', 25, null)).toBeGreaterThan(0);
   });
   it('A and B follow temperature: at 80 °C an ion is less active than at 25 °C', () => {
     expect(activityCoef(2, 0.05, 'DAVIES', 80, null)).toBeLessThan(activityCoef(2, 0.05, 'DAVIES', 25, null));
