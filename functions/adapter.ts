@@ -51,6 +51,8 @@
  * bundle, makes every global look-up cost about 150 ns. None of this changes a result.
  */
 import { DomainError, InputError, NotFoundError } from '../src/errors';
+import { numberTextKind } from '../src/numberText';
+import { MAX_NUMBER_CHARS } from '../src/textLimits';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
 import { currentTable, tablePending } from './context';
 
@@ -269,8 +271,6 @@ function asResultError(e: CustomFunctions.Error, name: string): CustomFunctions.
 /* Reading one value                                                                           */
 /* ------------------------------------------------------------------------------------------ */
 
-const NUMERIC_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-
 /** Shows a value in a message the way a cell would. */
 export function show(v: unknown): string {
   if (typeof v === 'string') {
@@ -296,9 +296,9 @@ type Converter = (raw: unknown) => ArgValue | CustomFunctions.Error;
 
 /** Reads numeric text: trimmed, plain decimal or exponent notation; undefined when it is not. */
 function numericText(raw: string): number | undefined {
-  if (raw.length > 400) return undefined; // no number is written with more characters
+  if (raw.length > MAX_NUMBER_CHARS) return undefined; // no number is written with more characters
   const t = raw.trim();
-  return NUMERIC_TEXT.test(t) ? Number(t) : undefined;
+  return numberTextKind(t) === 'number' ? Number(t) : undefined;
 }
 
 function numberFrom(raw: unknown, spec: ArgSpec, domain: Domain | undefined = spec.domain): number | CustomFunctions.Error {

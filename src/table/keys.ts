@@ -10,6 +10,7 @@
  * Electrode keys ignore case and white space ("ag/agcl/kcl(sat)" is "Ag/AgCl/KCl(sat)").
  */
 import { parseSpecies } from '../chem/formula';
+import { MAX_KEY_CHARS } from '../textLimits';
 
 /** The canonical key of one side of a couple key; the bare text when it is not a species. */
 function sideKey(text: string): string {
@@ -23,13 +24,16 @@ function sideKey(text: string): string {
 
 /**
  * Normalizes a couple key for look-up: "Cu(2+) / Cu" → "Cu2+/Cu", "Cr2O7^2-/Cr3+" → "Cr2O72-/Cr3+".
- * Text without exactly one "/" is returned without white space (it will not match a valid key).
+ * Text without exactly one "/" is returned without white space (it will not match a valid key); text
+ * longer than MAX_KEY_CHARS is returned as it is (no key is that long).
  *
  * Syntax: normalizeCoupleKey(key)
  * Example: normalizeCoupleKey("Fe(3+)/Fe+2") → "Fe3+/Fe2+"
  * See also: splitCoupleKey, normalizeElectrodeKey
  */
 export function normalizeCoupleKey(key: string): string {
+  // No table key is longer (src/textLimits.ts): such a text matches nothing and is not read further.
+  if (key.length > MAX_KEY_CHARS) return key;
   const parts = key.split('/');
   if (parts.length !== 2) return key.replace(/\s+/g, '');
   return `${sideKey(parts[0])}/${sideKey(parts[1])}`;
