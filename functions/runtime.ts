@@ -15,7 +15,7 @@
  *  5. when the stored table changes elsewhere (a co-author, another pane), the new one is read, used
  *     and the workbook recalculated.
  */
-import { installFunctionsHost, isCurrent, lastStoredValue, startTableLoad, useStoredValue } from './workbookHost';
+import { installFunctionsHost, installReadFailure, installStoredValue, lastStoredValue, readTicket, startTableLoad } from './workbookHost';
 import { TABLE_SETTING_KEY, readStoredValue, recalculateAll, sameStoredValue } from './workbookStore';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
@@ -28,6 +28,8 @@ function officePresent(): boolean {
 class NoAnswer extends Error {}
 
 let inExcel = false;
+/** True once the start-up read has passed its time-out (its late answer is then installed here). */
+let timedOut = false;
 
 /** Reads the stored value once Office is ready; null when not running in Excel (no workbook to read). */
 async function readAtStartup(): Promise<unknown> {
@@ -42,7 +44,10 @@ async function readAtStartup(): Promise<unknown> {
 
 function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
   return new Promise<T>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new NoAnswer(`Excel did not answer within ${ms / 1000} s`)), ms);
+    const timer = setTimeout(() => {
+      timedOut = true;
+      reject(new NoAnswer(`Excel did not answer within ${ms / 1000} s`));
+    }, ms);
     p.then(
       (v) => {
         clearTimeout(timer);
@@ -56,19 +61,33 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
   });
 }
 
-async function useIfChanged(value: unknown): Promise<void> {
+/**
+ * Reads the changed table and uses it, in the order of reads (a value the pane hands over after this
+ * read started wins). A value that cannot be read, or a read that fails, makes the functions answer
+ * #N/A: they never stay silently on the table they had.
+ */
+async function readChanged(): Promise<void> {
+  const ticket = readTicket();
+  let value: unknown;
+  try {
+    value = await readStoredValue();
+  } catch (e) {
+    console.error(`Cellwright: reading the changed ${TABLE_SETTING_KEY} setting failed`, e);
+    const why = e instanceof Error ? e.message : String(e);
+    if (installReadFailure(ticket, `the table was changed elsewhere and reading it failed (${why}); open the task pane to read it again`)) await recalculateAll();
+    return;
+  }
   if (sameStoredValue(value, lastStoredValue())) return;
-  useStoredValue(value);
-  await recalculateAll();
+  if (installStoredValue(ticket, value)) await recalculateAll();
 }
 
 async function watchForChanges(): Promise<void> {
   await Excel.run(async (context) => {
     context.workbook.settings.onSettingsChanged.add(async () => {
       try {
-        await useIfChanged(await readStoredValue());
+        await readChanged();
       } catch (e) {
-        console.error(`Cellwright: reading the changed ${TABLE_SETTING_KEY} setting failed`, e);
+        console.error(`Cellwright: using the changed ${TABLE_SETTING_KEY} setting failed`, e);
       }
     });
     await context.sync();
@@ -82,11 +101,8 @@ function start(): void {
   read.then(
     async (value) => {
       await load.done;
-      // The answer came after the time-out: use it now, unless the pane has set a table since.
-      if (isCurrent(load.generation) && lastStoredValue() === undefined) {
-        useStoredValue(value);
-        await recalculateAll();
-      }
+      // The answer came after the time-out: use it now, unless the pane has handed a table over since.
+      if (timedOut && installStoredValue(load.generation, value)) await recalculateAll();
       if (inExcel) await watchForChanges();
     },
     () => undefined, // the failure is already the table's reason (#N/A); nothing else to do

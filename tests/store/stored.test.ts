@@ -84,7 +84,7 @@ describe('stored table: schema upgrade', () => {
   });
 
   it('checks a schema-1 checksum too', () => {
-    const text = writeSchema1Text({ basedOn: B.version, changedAt: '', couples: B.couples, electrodes: [] }).replace('"e0":0.3419', '"e0":0.3418');
+    const text = writeSchema1Text({ basedOn: B.version, changedAt: '2025-06-01T00:00:00Z', couples: B.couples, electrodes: [] }).replace('"e0":0.3419', '"e0":0.3418');
     const r = readStoredText(text, B);
     expect(r.ok).toBe(false);
     expect(!r.ok && r.problem.kind).toBe('checksum');
