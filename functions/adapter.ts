@@ -51,6 +51,9 @@
  * bundle, makes every global look-up cost about 150 ns. None of this changes a result.
  */
 import { DomainError, InputError, NotFoundError } from '../src/errors';
+import { numberTextKind } from '../src/numberText';
+import { MAX_NUMBER_CHARS } from '../src/textLimits';
+import { suggestKey } from '../src/table/suggestKey';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
 import { currentTable, tablePending } from './context';
 
@@ -170,6 +173,8 @@ export interface FunctionSpec {
 /* Excel errors                                                                                */
 /* ------------------------------------------------------------------------------------------ */
 
+/** A message that is one line of words: no white space but single spaces, none at either end. */
+const ONE_LINE = /^(?! )(?:[^\s]| (?! |$))*$/;
 /** Longest message an error value carries. */
 const MAX_MESSAGE = 300;
 /** Longest quoted user text inside a message. */
@@ -183,7 +188,8 @@ const EXCEL_MAX_TEXT = 32767;
  * quoted input sits.
  */
 function tidyMessage(message: string): string {
-  let m = message.replace(/\s+/g, ' ').trim();
+  // Most messages are one line already: then nothing is rebuilt.
+  let m = ONE_LINE.test(message) ? message : message.replace(/\s+/g, ' ').trim();
   if (m.length > MAX_MESSAGE) {
     const tail = floor(MAX_MESSAGE / 3);
     m = `${m.slice(0, MAX_MESSAGE - tail - 1)}…${m.slice(m.length - tail)}`;
@@ -270,8 +276,6 @@ function asResultError(e: CustomFunctions.Error, name: string): CustomFunctions.
 /* Reading one value                                                                           */
 /* ------------------------------------------------------------------------------------------ */
 
-const NUMERIC_TEXT = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-
 /** Shows a value in a message the way a cell would. */
 export function show(v: unknown): string {
   if (typeof v === 'string') {
@@ -297,9 +301,9 @@ type Converter = (raw: unknown) => ArgValue | CustomFunctions.Error;
 
 /** Reads numeric text: trimmed, plain decimal or exponent notation; undefined when it is not. */
 function numericText(raw: string): number | undefined {
-  if (raw.length > 400) return undefined; // no number is written with more characters
+  if (raw.length > MAX_NUMBER_CHARS) return undefined; // no number is written with more characters
   const t = raw.trim();
-  return NUMERIC_TEXT.test(t) ? Number(t) : undefined;
+  return numberTextKind(t) === 'number' ? Number(t) : undefined;
 }
 
 function numberFrom(raw: unknown, spec: ArgSpec, domain: Domain | undefined = spec.domain): number | CustomFunctions.Error {
@@ -401,7 +405,7 @@ function memoLookUp<Row>(
   memo: Map<string, Row | CustomFunctions.Error>,
   key: string,
   find: (table: PotentialTable, key: string) => Row | undefined,
-  missing: (key: string) => CustomFunctions.Error,
+  missing: (key: string, table: PotentialTable) => CustomFunctions.Error,
 ): Row | CustomFunctions.Error {
   let table: PotentialTable;
   try {
@@ -416,11 +420,19 @@ function memoLookUp<Row>(
   }
   let hit = memo.get(key);
   if (hit === undefined) {
-    hit = find(table, key) ?? missing(key);
+    hit = find(table, key) ?? missing(key, table);
     if (memo.size >= MEMO_LIMIT) memo.clear();
     memo.set(key, hit);
   }
   return hit;
+}
+
+/** "unknown couple "X"; …" with a key that exists in this table, or a near match of what was typed. */
+function unknownKeyMessage(what: 'couple' | 'reference electrode', where: string, key: string, table: PotentialTable): string {
+  const s = suggestKey(table, what === 'couple' ? 'couple' : 'electrode', key);
+  if (s.near !== undefined) return `unknown ${what} ${show(key)}; did you mean "${s.near}"?`;
+  if (s.example !== undefined) return `unknown ${what} ${show(key)}; use a key of ${where} such as "${s.example}"`;
+  return `unknown ${what} ${show(key)}; ${where} has no ${what}s`;
 }
 
 function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
@@ -428,7 +440,7 @@ function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
     coupleMemo,
     key,
     (t, k) => t.findCouple(k),
-    (k) => notAvailable(`unknown couple ${show(k)}; use a key of the potential table such as "Cu2+/Cu"`),
+    (k, t) => notAvailable(unknownKeyMessage('couple', 'the potential table', k, t)),
   );
 }
 
@@ -437,7 +449,7 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
     electrodeMemo,
     key,
     (t, k) => t.findElectrode(k),
-    (k) => notAvailable(`unknown reference electrode ${show(k)}; use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"`),
+    (k, t) => notAvailable(unknownKeyMessage('reference electrode', 'the electrode table', k, t)),
   );
 }
 

@@ -44,13 +44,14 @@ export function setTableInUse(next: TableInUse): void {
 }
 
 /**
- * Marks the table as loading until `load` settles; its result becomes the table in use.
- * A rejected load makes the table unreadable with the rejection's message.
+ * Marks the table as loading until `load` settles; its result, when it is a table, becomes the table
+ * in use (a load that installs its result itself resolves to nothing). A rejected load makes the table
+ * unreadable with the rejection's message.
  */
-export function beginTableLoad(load: Promise<TableInUse>): Promise<void> {
+export function beginTableLoad(load: Promise<TableInUse | void>): Promise<void> {
   const p = load.then(
     (t) => {
-      inUse = t;
+      if (t !== undefined) inUse = t;
     },
     (e: unknown) => {
       inUse = { kind: 'unreadable', reason: e instanceof Error ? e.message : String(e) };

@@ -20,7 +20,7 @@
  *     the table recorded, so results saved under another table (an older built-in one, a table edited
  *     elsewhere) do not stay in the cells silently.
  */
-import { hostStatus, installFunctionsHost, isCurrent, lastStoredValue, startTableLoad, useStoredValue } from './workbookHost';
+import { hostStatus, installFunctionsHost, installReadFailure, installStoredValue, lastStoredValue, readTicket, startTableLoad } from './workbookHost';
 import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll, sameStoredValue } from './workbookStore';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
@@ -33,6 +33,10 @@ function officePresent(): boolean {
 class NoAnswer extends Error {}
 
 let inExcel = false;
+/** The table setting as last read from the workbook: the settings-changed event fires for every setting, the table's only matters. */
+let lastRead: unknown = undefined;
+/** True once the start-up read has passed its time-out (its late answer is then installed here). */
+let timedOut = false;
 
 /** Reads the stored value once Office is ready; null when not running in Excel (no workbook to read). */
 async function readAtStartup(): Promise<unknown> {
@@ -42,12 +46,16 @@ async function readAtStartup(): Promise<unknown> {
     throw new Error('this version of Excel cannot read workbook settings (ExcelApi 1.4 is needed)');
   }
   inExcel = true;
-  return readStoredValue();
+  lastRead = await readStoredValue();
+  return lastRead;
 }
 
 function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
   return new Promise<T>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new NoAnswer(`Excel did not answer within ${ms / 1000} s`)), ms);
+    const timer = setTimeout(() => {
+      timedOut = true;
+      reject(new NoAnswer(`Excel did not answer within ${ms / 1000} s`));
+    }, ms);
     p.then(
       (v) => {
         clearTimeout(timer);
@@ -61,9 +69,26 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
   });
 }
 
-async function useIfChanged(value: unknown): Promise<void> {
+/**
+ * Reads the changed table and uses it, in the order of reads (a value the pane hands over after this
+ * read started wins). A value that cannot be read, or a read that fails, makes the functions answer
+ * #N/A: they never stay silently on the table they had.
+ */
+async function readChanged(): Promise<void> {
+  const ticket = readTicket();
+  let value: unknown;
+  try {
+    value = await readStoredValue();
+  } catch (e) {
+    console.error(`Cellwright: reading the changed ${TABLE_SETTING_KEY} setting failed`, e);
+    const why = e instanceof Error ? e.message : String(e);
+    if (installReadFailure(ticket, `the table was changed elsewhere and reading it failed (${why}); open the task pane to read it again`)) await recalculateAll(computedWithOf(hostStatus()));
+    return;
+  }
+  if (sameStoredValue(value, lastRead)) return;
+  lastRead = value;
   if (sameStoredValue(value, lastStoredValue())) return;
-  await recalculateAll(computedWithOf(useStoredValue(value)));
+  if (installStoredValue(ticket, value)) await recalculateAll(computedWithOf(hostStatus()));
 }
 
 /** Recalculates once when the workbook's results were computed with another table than the one in use. */
@@ -77,9 +102,9 @@ async function watchForChanges(): Promise<void> {
   await Excel.run(async (context) => {
     context.workbook.settings.onSettingsChanged.add(async () => {
       try {
-        await useIfChanged(await readStoredValue());
+        await readChanged();
       } catch (e) {
-        console.error(`Cellwright: reading the changed ${TABLE_SETTING_KEY} setting failed`, e);
+        console.error(`Cellwright: using the changed ${TABLE_SETTING_KEY} setting failed`, e);
       }
     });
     await context.sync();
@@ -93,12 +118,9 @@ function start(): void {
   read.then(
     async (value) => {
       await load.done;
-      // The answer came after the time-out: use it now, unless the pane has set a table since.
-      if (isCurrent(load.generation) && lastStoredValue() === undefined) {
-        await recalculateAll(computedWithOf(useStoredValue(value)));
-      } else if (inExcel) {
-        await recalculateIfStale();
-      }
+      // The answer came after the time-out: use it now, unless the pane has handed a table over since.
+      if (timedOut && installStoredValue(load.generation, value)) await recalculateAll(computedWithOf(hostStatus()));
+      else if (inExcel) await recalculateIfStale();
       if (inExcel) await watchForChanges();
     },
     () => undefined, // the failure is already the table's reason (#N/A); nothing else to do

@@ -19,7 +19,8 @@
  * caller recalculates afterwards (functions/workbookStore.ts, recalculateAll).
  */
 import { recordsOf } from '../src/store/rows';
-import { builtinChecksum, readStoredText } from '../src/store/stored';
+import { InstallOrder } from '../src/store/installOrder';
+import { type StoredRead, builtinChecksum, readStoredText } from '../src/store/stored';
 import { builtinTable } from '../src/table/builtin';
 import { type TableInUse, beginTableLoad, setTableInUse, tableInUse, tablePending } from './context';
 
@@ -55,8 +56,10 @@ const MAX_REASON = 200;
 let details: { revision?: number; checksum?: string; changedAt?: string } = {};
 /** The stored value the table in use came from (undefined before any was read). */
 let lastValue: unknown = undefined;
-/** Counts changes of the table in use; a start-up load that finishes after a newer change is dropped. */
-let generation = 0;
+/** The value seen after a failed read: equal to no stored value, so the next read is always used. */
+const READ_FAILED: unknown = Object.freeze({ readFailed: true });
+/** The order of installs: a read that finishes after a newer read or handover is dropped. */
+const order = new InstallOrder();
 
 function shorten(reason: string): string {
   const one = reason.replace(/\s+/g, ' ').trim();
@@ -74,7 +77,12 @@ export function tableForStoredValue(value: unknown): TableInUse {
     details = { checksum: builtinChecksum(recordsOf(builtin)) };
     return { kind: 'builtin', table: builtin };
   }
-  const read = readStoredText(value, recordsOf(builtin));
+  let read: StoredRead;
+  try {
+    read = readStoredText(value, recordsOf(builtin));
+  } catch (e) {
+    read = { ok: false, problem: { kind: 'damaged', message: `the stored table could not be checked (${e instanceof Error ? e.message : String(e)})`, details: [] } };
+  }
   if (!read.ok) {
     details = {};
     return { kind: 'unreadable', reason: shorten(read.problem.message) };
@@ -110,32 +118,49 @@ export function tableDetails(): { readonly revision?: number; readonly checksum?
   return details;
 }
 
-/** Makes the functions use a stored value now (see the channel above). */
+/** Makes the functions use a stored value now (see the channel above): a handover is newer than every read started before it. */
 export function useStoredValue(value: unknown): FunctionsHostStatus {
-  generation++;
-  setTableInUse(tableForStoredValue(value));
+  installStoredValue(readTicket(), value);
   return hostStatus();
+}
+
+/** A ticket for a read of the stored table that starts now (src/store/installOrder.ts). */
+export function readTicket(): number {
+  return order.ticket();
+}
+
+/**
+ * Installs what a read of ticket `ticket` found, unless a later read or handover has installed
+ * something already; table, status and the value seen change together, in one step. True when it was
+ * installed.
+ */
+export function installStoredValue(ticket: number, value: unknown): boolean {
+  return order.install(ticket, () => setTableInUse(tableForStoredValue(value)));
+}
+
+/** Installs "unreadable" for a read of ticket `ticket` that failed (same ordering as installStoredValue). */
+export function installReadFailure(ticket: number, reason: string): boolean {
+  return order.install(ticket, () => {
+    details = {};
+    lastValue = READ_FAILED;
+    setTableInUse({ kind: 'unreadable', reason: shorten(reason) });
+  });
 }
 
 /**
  * Starts reading the workbook's table: table look-ups wait for `read` (functions/context.ts). The
- * result is dropped when the pane has set a table in the meantime. A failed read makes the table
- * unreadable with the failure's message: the functions answer #N/A rather than use the built-in table.
- * Returns the load's generation (see isCurrent) and a promise that settles when the load has.
+ * result is installed in the order of reads (installStoredValue): dropped when the pane has handed a
+ * value over since the read started. A failed read makes the table unreadable with the failure's
+ * message: the functions answer #N/A rather than use the built-in table. Returns the read's ticket and
+ * a promise that settles when the load has.
  */
 export function startTableLoad(read: Promise<unknown>): { readonly generation: number; readonly done: Promise<void> } {
-  const mine = ++generation;
+  const mine = readTicket();
   const load = read.then(
-    (value): TableInUse => (generation === mine ? tableForStoredValue(value) : tableInUse()),
-    (e: unknown): TableInUse =>
-      generation === mine ? { kind: 'unreadable', reason: shorten(`reading it failed: ${e instanceof Error ? e.message : String(e)}`) } : tableInUse(),
+    (value) => void installStoredValue(mine, value),
+    (e: unknown) => void installReadFailure(mine, `reading it failed: ${e instanceof Error ? e.message : String(e)}`),
   );
   return { generation: mine, done: beginTableLoad(load) };
-}
-
-/** True while nothing has changed the table in use since the load or change of that generation. */
-export function isCurrent(g: number): boolean {
-  return generation === g;
 }
 
 /** Puts the channel on globalThis (once). */

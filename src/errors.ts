@@ -9,7 +9,14 @@
  */
 export class CellwrightError extends Error {
   constructor(message: string) {
+    // These errors carry a reason for a cell, not a place in the code: where the engine records stacks
+    // (Error.stackTraceLimit), none is recorded, so refusing a text (an unknown key among a million
+    // cells) costs little.
+    const E = Error as { stackTraceLimit?: number };
+    const limit = E.stackTraceLimit;
+    if (typeof limit === 'number') E.stackTraceLimit = 0;
     super(message);
+    if (typeof limit === 'number') E.stackTraceLimit = limit;
     this.name = new.target.name;
   }
 }

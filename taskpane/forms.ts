@@ -10,6 +10,8 @@ import { parseHalfReaction, speciesState, displaySpecies, type HalfReaction } fr
 import type { CoupleRecord, ElectrodeRecord } from '../src/table/records';
 import { DEDT_RANGE_MV_K, E0_RANGE_V, validateCoupleRecord, validateElectrodeRecord } from '../src/table/table';
 import { ALIAS_SEPARATOR } from '../src/store/csv';
+import { numberTextKind } from '../src/numberText';
+import { MAX_KEY_CHARS, MAX_NOTE_CHARS, MAX_NUMBER_CHARS, MAX_SOURCE_CHARS } from '../src/textLimits';
 
 export interface CoupleFields {
   key: string;
@@ -38,13 +40,25 @@ export interface FormCheck<F, R> {
 
 /** Reads a number typed by a person; a text error when it is not one. */
 export function readNumber(text: string, label: string, range: { min: number; max: number }, unit: string, required: boolean): number | undefined | { error: string } {
+  if (text.length > MAX_NUMBER_CHARS) return { error: `${label} is too long for a number (at most ${MAX_NUMBER_CHARS} characters)` };
   const t = text.trim().replace(/\u2212/g, '-');
   if (t === '') return required ? { error: `${label} is required` } : undefined;
-  if (/^[+-]?\d*,\d+$/.test(t)) return { error: `write ${label} with a decimal point (${t.replace(',', '.')})` };
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return { error: `${label} must be a number, e.g. 0.25` };
+  const kind = numberTextKind(t);
+  if (kind === 'decimal-comma') return { error: `write ${label} with a decimal point (${t.replace(',', '.')})` };
+  if (kind !== 'number') return { error: `${label} must be a number, e.g. 0.25` };
   const x = Number(t);
   if (!Number.isFinite(x) || x < range.min || x > range.max) return { error: `${label} must lie between ${range.min} and ${range.max} ${unit}` };
   return x;
+}
+
+/** Errors for a key, source or note longer than the table accepts (src/textLimits.ts). */
+function lengthErrors(f: { key: string; source: string; note: string }): Partial<Record<'key' | 'source' | 'note', string>> {
+  const out: Partial<Record<'key' | 'source' | 'note', string>> = {};
+  const too = (what: string, text: string, max: number) => `${what} is too long (${text.trim().length} characters; at most ${max})`;
+  if (f.key.trim().length > MAX_KEY_CHARS) out.key = too('the key', f.key, MAX_KEY_CHARS);
+  if (f.source.trim().length > MAX_SOURCE_CHARS) out.source = too('the source', f.source, MAX_SOURCE_CHARS);
+  if (f.note.trim().length > MAX_NOTE_CHARS) out.note = too('the note', f.note, MAX_NOTE_CHARS);
+  return out;
 }
 
 /** "Cu2+/Cu" from "Cu2+ + 2e- -> Cu": the first species of each side other than H+, OH- and water. */
@@ -80,6 +94,7 @@ export function checkCoupleForm(f: CoupleFields, keyTaken: (key: string) => bool
   const dEdT = readNumber(f.dEdT, 'dE°/dT', DEDT_RANGE_MV_K, 'mV/K', false);
   if (typeof dEdT === 'object') errors.dEdT = dEdT.error;
   if (f.source.trim() === '') errors.source = 'a source is required: where do these numbers come from?';
+  Object.assign(errors, lengthErrors(f));
 
   const key = f.key.trim();
   if (parsed !== undefined) {
@@ -128,6 +143,7 @@ export function checkElectrodeForm(f: ElectrodeFields, nameTaken: (name: string)
   const dEdT = readNumber(f.dEdT, 'dE/dT', DEDT_RANGE_MV_K, 'mV/K', false);
   if (typeof dEdT === 'object') errors.dEdT = dEdT.error;
   if (f.source.trim() === '') errors.source = 'a source is required: where does this potential come from?';
+  Object.assign(errors, lengthErrors(f));
   if (Object.keys(errors).length > 0) return { errors, info };
   const record: ElectrodeRecord = {
     key,

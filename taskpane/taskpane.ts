@@ -8,7 +8,7 @@
  */
 import { parseHalfReaction } from '../src/chem/halfReaction';
 import { describeDifference, type RowDifference } from '../src/store/diff';
-import { type CsvImport, exportCsv, importCsv } from '../src/store/csv';
+import { type CsvImport, MAX_CSV_BYTES, exportCsv, importCsv } from '../src/store/csv';
 import type { TableChange } from '../src/store/copy';
 import { applyChange } from '../src/store/copy';
 import { diffTables } from '../src/store/diff';
@@ -287,7 +287,9 @@ function renderInUse(): void {
       body,
       h('p', {}, h('strong', {}, 'This workbook’s table cannot be read')),
       h('p', { id: 'unreadable-reason' }, `${st.problem.message[0].toUpperCase()}${st.problem.message.slice(1)}.`),
-      st.problem.details.length > 0 ? h('ul', {}, ...st.problem.details.slice(0, 8).map((d) => h('li', {}, d))) : null,
+      st.problem.details.length > 0
+        ? h('details', { id: 'unreadable-details' }, h('summary', {}, 'Details'), h('ul', {}, ...st.problem.details.slice(0, 8).map((d) => h('li', {}, d))))
+        : null,
       h('p', {}, 'Worksheet functions that use the table show #N/A until this is resolved. Nothing has been changed or replaced: the built-in table is not used in its place.'),
       h(
         'div',
@@ -778,7 +780,7 @@ async function doImport(skipRejected: boolean): Promise<void> {
 async function readImportFile(): Promise<void> {
   const file = byId<HTMLInputElement>('import-file').files?.[0];
   if (file === undefined) return;
-  if (file.size > 8_000_000) {
+  if (file.size > MAX_CSV_BYTES) {
     showProblem(`The file ${file.name} is larger than 8 MB; Cellwright does not read it.`);
     return;
   }

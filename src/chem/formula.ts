@@ -16,6 +16,7 @@
  *   Write "^" wherever a digit could be read either way ("VO^2+" is vanadyl).
  */
 import { InputError } from '../errors';
+import { MAX_FORMULA_CHARS } from '../textLimits';
 import { isElementSymbol } from './elements';
 
 export type Phase = 's' | 'l' | 'g' | 'aq';
@@ -84,8 +85,44 @@ function parseChargeText(t: string): number | undefined {
   return parseSigns(t);
 }
 
+/**
+ * A trailing charge group "(2+)", "(+2)", "(-)", "(--)" not at the start: its inner text and where it
+ * starts. Scanned from the end, once (no pattern that could backtrack).
+ */
+function trailingChargeGroup(s: string): { charge: string; at: number } | undefined {
+  if (!s.endsWith(')')) return undefined;
+  const at = s.lastIndexOf('(');
+  if (at <= 0) return undefined;
+  const inner = s.slice(at + 1, -1);
+  // [0-9]*[+-]+ or [+-][0-9]+
+  let i = 0;
+  while (i < inner.length && inner[i] >= '0' && inner[i] <= '9') i++;
+  let j = i;
+  while (j < inner.length && (inner[j] === '+' || inner[j] === '-')) j++;
+  if (j > i && j === inner.length) return { charge: inner, at };
+  if (inner.length >= 2 && (inner[0] === '+' || inner[0] === '-')) {
+    let k = 1;
+    while (k < inner.length && inner[k] >= '0' && inner[k] <= '9') k++;
+    if (k === inner.length) return { charge: inner, at };
+  }
+  return undefined;
+}
+
+/** A trailing sign and digits after a letter or a closing bracket ("Cu+2", "Fe(CN)6-3"): the parts and where the sign stands. */
+function signsThenDigits(s: string): { sign: string; digits: string; at: number } | undefined {
+  let i = s.length;
+  while (i > 0 && s[i - 1] >= '0' && s[i - 1] <= '9') i--;
+  if (i === s.length || i < 2) return undefined;
+  const sign = s[i - 1];
+  if (sign !== '+' && sign !== '-') return undefined;
+  const before = s[i - 2];
+  if (!((before >= 'A' && before <= 'Z') || (before >= 'a' && before <= 'z') || before === ']' || before === ')')) return undefined;
+  return { sign, digits: s.slice(i), at: i - 1 };
+}
+
 /** Splits a species text into body, charge and phase. Throws InputError on text it cannot read. */
 export function splitSpecies(text: string): { body: string; charge: number; phase?: Phase; chargeFromDigit?: boolean } {
+  if (text.length > MAX_FORMULA_CHARS) throw new InputError(`a species is too long (${text.length} characters; at most ${MAX_FORMULA_CHARS})`);
   let s = text.replace(/\s+/g, '');
   if (s === '') throw new InputError('a species is empty');
   let phase: Phase | undefined;
@@ -104,28 +141,34 @@ export function splitSpecies(text: string): { body: string; charge: number; phas
     charge = c;
     s = s.slice(0, caret);
   } else {
-    let m = /\(([0-9]*[+-]+|[+-][0-9]+)\)$/.exec(s);
-    if (m && m.index > 0) {
-      const c = parseChargeText(m[1]);
+    const bracket = trailingChargeGroup(s);
+    const tail = bracket === undefined ? signsThenDigits(s) : undefined;
+    if (bracket !== undefined) {
+      const c = parseChargeText(bracket.charge);
       if (c === undefined) throw new InputError(`cannot read the charge in "${text}"`);
       charge = c;
-      s = s.slice(0, m.index);
-    } else if ((m = /([A-Za-z\])])([+-])(\d+)$/.exec(s))) {
+      s = s.slice(0, bracket.at);
+    } else if (tail !== undefined) {
       // "Cu+2": a sign followed by digits
-      charge = (m[2] === '+' ? 1 : -1) * Number(m[3]);
-      s = s.slice(0, m.index + 1);
-    } else if ((m = /(\++|-+)$/.exec(s))) {
-      const signs = m[1];
-      const unit = signs[0] === '+' ? 1 : -1;
-      s = s.slice(0, m.index);
-      if (signs.length > 1) {
-        charge = unit * signs.length;
+      charge = (tail.sign === '+' ? 1 : -1) * Number(tail.digits);
+      s = s.slice(0, tail.at);
+    } else if (s.endsWith('+') || s.endsWith('-')) {
+      const sign = s[s.length - 1];
+      let at = s.length;
+      while (at > 0 && s[at - 1] === sign) at--;
+      const count = s.length - at;
+      const unit = sign === '+' ? 1 : -1;
+      s = s.slice(0, at);
+      if (count > 1) {
+        charge = unit * count;
       } else {
-        const d = /(\d)$/.exec(s);
-        const rest = d ? s.slice(0, -1) : s;
-        if (d && rest !== '' && (isElementSymbol(rest) || /\d$/.test(rest))) {
+        const last = s.length > 0 ? s[s.length - 1] : '';
+        const d = last >= '0' && last <= '9' ? last : null;
+        const rest = d !== null ? s.slice(0, -1) : s;
+        const restLast = rest.length > 0 ? rest[rest.length - 1] : '';
+        if (d !== null && rest !== '' && (isElementSymbol(rest) || (restLast >= '0' && restLast <= '9'))) {
           // "Cu2+", "S2-" (a lone element) or "SO42-", "Hg22+" (two digits): the last digit is the charge
-          charge = unit * Number(d[1]);
+          charge = unit * Number(d);
           chargeFromDigit = isElementSymbol(rest);
           s = rest;
         } else {
@@ -145,6 +188,7 @@ export function splitSpecies(text: string): { body: string; charge: number; phas
  * multipliers, and hydrate dots (·, * or .) each followed by an optional multiplier ("CuSO4·5H2O").
  */
 export function parseFormula(body: string): Record<string, number> {
+  if (body.length > MAX_FORMULA_CHARS) throw new InputError(`a formula is too long (${body.length} characters; at most ${MAX_FORMULA_CHARS})`);
   const s = body.replace(/\s+/g, '');
   if (s === '') throw new InputError('a formula is empty');
   const total: Record<string, number> = {};
@@ -179,10 +223,10 @@ function parseGroup(s: string, whole: string): Record<string, number> {
   const stack: Array<{ counts: Record<string, number>; close: string }> = [{ counts: {}, close: '' }];
   let i = 0;
   const readNumber = (): number => {
-    const m = /^\d+/.exec(s.slice(i));
-    if (!m) return 1;
-    i += m[0].length;
-    const n = Number(m[0]);
+    const start = i;
+    while (i < s.length && s[i] >= '0' && s[i] <= '9') i++;
+    if (i === start) return 1;
+    const n = Number(s.slice(start, i));
     if (n === 0) throw new InputError(`cannot read the formula "${whole}": a count of 0`);
     return n;
   };

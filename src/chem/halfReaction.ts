@@ -15,6 +15,7 @@
  * not ("O: 4 on the left, 3 on the right").
  */
 import { DomainError, InputError } from '../errors';
+import { MAX_FORMULA_CHARS } from '../textLimits';
 import { type Phase, type Species, canonicalSpecies, chargeSuffix, parseSpecies, splitSpecies } from './formula';
 
 /** The side of a half-reaction: 'ox' is the oxidized (left) side, 'red' the reduced (right) side. */
@@ -288,7 +289,7 @@ function digitChargeHint(off: ReadonlySet<string>, ...sides: ReadonlyArray<Reado
  */
 export function parseHalfReaction(text: string): HalfReaction {
   if (typeof text !== 'string' || text.trim() === '') throw new InputError('the half-reaction is empty');
-  if (text.length > 1000) throw new InputError('the half-reaction is too long (at most 1000 characters)');
+  if (text.length > MAX_FORMULA_CHARS) throw new InputError(`the half-reaction is too long (at most ${MAX_FORMULA_CHARS} characters)`);
   const normalized = text.replace(/[−–]/g, '-');
   const arrows = normalized.match(ARROW_RE) ?? [];
   if (arrows.length === 0) throw new InputError(`no arrow in "${text}"; write the half-reaction as "Ox + n e- -> Red" (or with =, <=>, ⇌)`);

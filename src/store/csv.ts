@@ -24,13 +24,19 @@
  * gets one more, so every text reads back exactly).
  */
 import type { CoupleRecord, ElectrodeRecord } from '../table/records';
+import { numberTextKind } from '../numberText';
 import { validateCoupleRecord, validateElectrodeRecord } from '../table/table';
+import { MAX_NOTE_CHARS, MAX_NUMBER_CHARS } from '../textLimits';
 import { type RowKind, type TableRecords, cleanCouple, cleanElectrode, matchKey } from './rows';
 
 export const CSV_COLUMNS = ['row_type', 'key', 'half_reaction', 'other_names', 'potential_V', 'dEdT_mV_per_K', 'source', 'note'] as const;
 type Column = (typeof CSV_COLUMNS)[number];
 const REQUIRED: readonly Column[] = ['row_type', 'key', 'potential_V', 'source'];
 export const ALIAS_SEPARATOR = '|';
+/** The longest field read (the longest text a row holds is a note, src/textLimits.ts). */
+const MAX_FIELD_CHARS = MAX_NOTE_CHARS;
+/** The largest CSV text read, in bytes of UTF-8, whether it comes from a file or is pasted. */
+export const MAX_CSV_BYTES = 8_000_000;
 
 export interface CsvAccepted {
   /** Line (1-based) on which the row starts. */
@@ -94,9 +100,12 @@ function splitRecords(text: string, sep: string): RawRecord[] {
             i++;
           }
         } else {
-          if (c === '\n') line++;
-          field += c;
-          i++;
+          // the run up to the next quote, taken whole
+          let q = text.indexOf('"', i);
+          if (q < 0) q = n;
+          for (let k = i; k < q; k++) if (text.charCodeAt(k) === 10) line++;
+          field += text.slice(i, q);
+          i = q;
         }
       } else if (c === '"' && fieldStart) {
         quoted = true;
@@ -113,14 +122,23 @@ function splitRecords(text: string, sep: string): RawRecord[] {
         line++;
         done = true;
       } else {
-        field += c;
+        // the run up to the next separator, quote or line break, taken whole
+        let k = i + 1;
+        while (k < n) {
+          const d = text[k];
+          if (d === sep || d === '"' || d === '\r' || d === '\n') break;
+          k++;
+        }
+        field += text.slice(i, k);
         fieldStart = false;
-        i++;
+        i = k;
       }
     }
     if (quoted) throw new Error(`a quoted field opened on line ${startLine} is never closed`);
     fields.push(field);
-    const raw = text.slice(start, i).replace(/[\r\n]+$/, '');
+    let end = i;
+    while (end > start && (text[end - 1] === '\r' || text[end - 1] === '\n')) end--;
+    const raw = text.slice(start, end);
     out.push({ line: startLine, text: raw.length > 120 ? `${raw.slice(0, 117)}…` : raw, fields });
   }
   return out;
@@ -146,14 +164,36 @@ function guard(s: string): string {
   return FORMULA_START.test(s) || s.startsWith("'") ? `'${s}` : s;
 }
 
+/** A text as a message shows it: quoted, cut to 40 characters. */
+function quoted(text: string): string {
+  return `"${text.length > 40 ? `${text.slice(0, 39)}…` : text}"`;
+}
+
 function parseNumber(text: string, column: string, decimalComma: boolean): number | string {
+  if (text.length > MAX_NUMBER_CHARS) return `${column} is too long for a number (${text.length} characters; at most ${MAX_NUMBER_CHARS})`;
   let t = text.trim().replace(/\u2212/g, '-');
-  if (decimalComma) t = t.replace(',', '.');
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) {
-    if (!decimalComma && /^[+-]?\d*,\d+$/.test(t)) return `${column} "${text.trim()}" uses a decimal comma; write a point (0.25) in a comma-separated file`;
-    return `${column} "${text.trim()}" is not a number`;
+  const kind = numberTextKind(t);
+  if (kind === 'decimal-comma' && decimalComma) t = t.replace(',', '.');
+  else if (kind !== 'number') {
+    if (kind === 'decimal-comma') return `${column} ${quoted(text.trim())} uses a decimal comma; write a point (0.25) in a comma-separated file`;
+    return `${column} ${quoted(text.trim())} is not a number`;
   }
   return Number(t);
+}
+
+/** The length of a text in UTF-8 bytes. */
+function utf8Bytes(text: string): number {
+  let bytes = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 0x80) bytes += 1;
+    else if (c < 0x800) bytes += 2;
+    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length && (text.charCodeAt(i + 1) & 0xfc00) === 0xdc00) {
+      bytes += 4;
+      i++;
+    } else bytes += 3;
+  }
+  return bytes;
 }
 
 /**
@@ -166,9 +206,17 @@ function parseNumber(text: string, column: string, decimalComma: boolean): numbe
  */
 export function importCsv(text: string): CsvImport {
   const empty = (fileProblem: string): CsvImport => ({ fileProblem, accepted: [], rejected: [], couples: [], electrodes: [] });
+  if (text.length > MAX_CSV_BYTES || utf8Bytes(text) > MAX_CSV_BYTES) return empty(`the text is larger than 8 MB (${MAX_CSV_BYTES.toLocaleString('en-US')} bytes of UTF-8); Cellwright does not read it`);
   const body = text.startsWith('\uFEFF') ? text.slice(1) : text;
   // The separator is the header's: the first line that is neither blank nor a comment.
-  const headerLine = body.split(/\r\n|\n|\r/).find((l) => l.trim() !== '' && !l.trimStart().startsWith('#'));
+  let headerLine: string | undefined;
+  for (let pos = 0; pos < body.length && headerLine === undefined; ) {
+    let end = pos;
+    while (end < body.length && body[end] !== '\n' && body[end] !== '\r') end++;
+    const l = body.slice(pos, end);
+    if (l.trim() !== '' && !l.trimStart().startsWith('#')) headerLine = l;
+    pos = end + (body[end] === '\r' && body[end + 1] === '\n' ? 2 : 1);
+  }
   if (headerLine === undefined) return empty('the file has no header line (expected: ' + CSV_COLUMNS.join(',') + ')');
   const sep = headerLine.includes(',') ? ',' : headerLine.includes(';') ? ';' : headerLine.includes('\t') ? '\t' : ',';
   let records: RawRecord[];
@@ -193,6 +241,11 @@ export function importCsv(text: string): CsvImport {
   const seen = { couple: new Map<string, number>(), electrode: new Map<string, number>() };
   for (const r of records) {
     const reject = (reason: string) => rejected.push({ line: r.line, text: r.text, reason });
+    const long = r.fields.findIndex((f) => f.length > MAX_FIELD_CHARS);
+    if (long >= 0) {
+      reject(`the field in column ${long + 1} has ${r.fields[long].length.toLocaleString('en-US')} characters; no field of the layout holds more than ${MAX_FIELD_CHARS.toLocaleString('en-US')}`);
+      continue;
+    }
     if (r.fields.length !== names.length) {
       reject(`it has ${r.fields.length} field${r.fields.length === 1 ? '' : 's'}; the header has ${names.length}`);
       continue;
@@ -264,6 +317,24 @@ function cell(s: string): string {
   return /[",\r\n]/.test(g) || g !== g.trim() ? `"${g.replace(/"/g, '""')}"` : g;
 }
 
+/**
+ * A comment line for export: one line, and each piece a spreadsheet program could read as a cell of
+ * its own (split at a comma, semicolon or tab; the separator depends on the program and its locale)
+ * formula-guarded: an apostrophe goes before its first non-blank character when that is = + - @ or a
+ * quote (a quote would open a quoted cell, whose content could then start a formula). The line still
+ * starts with "#", so the import skips it whole.
+ */
+function commentLine(text: string): string {
+  const one = text.replace(/[\r\n]+/g, ' ');
+  const pieces = one.split(/([,;\t])/);
+  for (let i = 0; i < pieces.length; i += 2) {
+    const p = pieces[i];
+    const lead = p.length - p.trimStart().length;
+    if (lead < p.length && '=+-@"\''.includes(p[lead])) pieces[i] = `${p.slice(0, lead)}'${p.slice(lead)}`;
+  }
+  return pieces.join('');
+}
+
 /** A number cell, as JavaScript writes it (a leading minus is a number, not a formula). */
 function num(x: number | undefined): string {
   return x === undefined ? '' : String(x);
@@ -279,7 +350,7 @@ function num(x: number | undefined): string {
  */
 export function exportCsv(t: TableRecords, description: string): string {
   const lines: string[] = [
-    `# Cellwright potential table, CSV layout 1. ${description.replace(/[\r\n]+/g, ' ')}`,
+    commentLine(`# Cellwright potential table, CSV layout 1. ${description}`),
     '# Potentials in V vs SHE at 25 °C; dE/dT in mV/K. Lines starting with # are comments.',
     CSV_COLUMNS.join(','),
   ];

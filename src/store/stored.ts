@@ -35,6 +35,9 @@ import { canonicalJson } from './canonical';
 import { ChangeError, type KeyLists, type WorkbookCopy, pinnedCopy, tableOfCopy } from './copy';
 import { type TableRecords, type VersionedRecords, matchKey, sameRecord } from './rows';
 import { sha256Hex } from './sha256';
+import { isTableVersion } from './tableVersion';
+import { isUtcTimestamp } from './utcTimestamp';
+import { MAX_FORMULA_CHARS, MAX_KEY_CHARS, MAX_NOTE_CHARS, MAX_SOURCE_CHARS } from '../textLimits';
 
 export const STORED_FORMAT = 'cellwright.potential-table';
 export const STORED_SCHEMA = 2;
@@ -162,6 +165,31 @@ function isPlainObject(x: unknown): x is Record<string, unknown> {
 const COUPLE_FIELDS = new Set(['key', 'halfReaction', 'e0', 'dEdT_mV_K', 'source', 'note']);
 const ELECTRODE_FIELDS = new Set(['key', 'aliases', 'potential', 'dEdT_mV_K', 'source', 'note']);
 
+/** Longest field name echoed in a message. */
+const shortName = (k: string): string => JSON.stringify(k.length > 40 ? `${k.slice(0, 39)}…` : k);
+
+const isText = (max: number) => (v: unknown): boolean => typeof v === 'string' && v.length <= max;
+const isFiniteNumber = (v: unknown): boolean => typeof v === 'number' && Number.isFinite(v);
+/**
+ * What each field of a row may hold, checked before anything else reads the row (the checksum
+ * included): texts within their length limits, finite numbers, a list of short texts. This keeps
+ * values the checksum cannot be computed over (numbers beyond double range read as Infinity, deep
+ * nesting) and texts too long for the readers away from everything after it.
+ */
+const FIELD_TYPES: Record<string, { test: (v: unknown) => boolean; what: string; optional?: boolean }> = {
+  key: { test: isText(MAX_KEY_CHARS), what: `a text of at most ${MAX_KEY_CHARS} characters` },
+  halfReaction: { test: isText(MAX_FORMULA_CHARS), what: `a text of at most ${MAX_FORMULA_CHARS} characters` },
+  e0: { test: isFiniteNumber, what: 'a finite number' },
+  potential: { test: isFiniteNumber, what: 'a finite number' },
+  dEdT_mV_K: { test: isFiniteNumber, what: 'a finite number', optional: true },
+  source: { test: isText(MAX_SOURCE_CHARS), what: `a text of at most ${MAX_SOURCE_CHARS} characters` },
+  note: { test: isText(MAX_NOTE_CHARS), what: `a text of at most ${MAX_NOTE_CHARS} characters`, optional: true },
+  aliases: {
+    test: (v) => Array.isArray(v) && v.length <= 100 && v.every(isText(MAX_KEY_CHARS)),
+    what: `a list of at most 100 texts of at most ${MAX_KEY_CHARS} characters`,
+  },
+};
+
 function checkRows(name: string, x: unknown, allowed: Set<string>, problems: string[]): Record<string, unknown>[] {
   if (!Array.isArray(x)) {
     problems.push(`"${name}" is not a list`);
@@ -171,7 +199,13 @@ function checkRows(name: string, x: unknown, allowed: Set<string>, problems: str
     if (!isPlainObject(r)) problems.push(`${name} row ${i + 1} is not a record`);
     else {
       const extra = Object.keys(r).filter((k) => !allowed.has(k));
-      if (extra.length > 0) problems.push(`${name} row ${i + 1} has fields Cellwright does not write: ${extra.map((k) => JSON.stringify(k)).join(', ')}`);
+      if (extra.length > 0) problems.push(`${name} row ${i + 1} has fields Cellwright does not write: ${extra.slice(0, 5).map(shortName).join(', ')}`);
+      for (const f of allowed) {
+        const rule = FIELD_TYPES[f];
+        if (!(f in r)) {
+          if (!rule.optional) problems.push(`${name} row ${i + 1} has no "${f}"`);
+        } else if (!rule.test(r[f])) problems.push(`${name} row ${i + 1}: "${f}" is not ${rule.what}`);
+      }
     }
   });
   return x.filter(isPlainObject);
@@ -179,13 +213,16 @@ function checkRows(name: string, x: unknown, allowed: Set<string>, problems: str
 
 function checkKeyLists(name: string, x: unknown, problems: string[]): KeyLists {
   const ok = isPlainObject(x) && Object.keys(x).every((k) => k === 'couples' || k === 'electrodes');
-  const list = (v: unknown) => Array.isArray(v) && v.every((s) => typeof s === 'string');
+  const list = (v: unknown) => Array.isArray(v) && v.every(isText(MAX_KEY_CHARS));
   if (!ok || !list(x.couples) || !list(x.electrodes)) {
-    problems.push(`"${name}" is not { couples: [keys], electrodes: [keys] }`);
+    problems.push(`"${name}" is not { couples: [keys], electrodes: [keys] } with keys of at most ${MAX_KEY_CHARS} characters`);
     return { couples: [], electrodes: [] };
   }
   return { couples: x.couples as string[], electrodes: x.electrodes as string[] };
 }
+
+/** The highest revision read: the next write (revision + 1) must still be an exact whole number. */
+export const MAX_REVISION = Number.MAX_SAFE_INTEGER - 1;
 
 /**
  * Reads a stored text. `builtin` is the add-in's built-in table (used only to upgrade schema 1).
@@ -195,7 +232,16 @@ function checkKeyLists(name: string, x: unknown, problems: string[]): KeyLists {
  */
 export function readStoredText(text: unknown, builtin: VersionedRecords): StoredRead {
   if (lastRead !== null && text === lastRead.text) return lastRead.result;
-  const result = readUncached(text, builtin);
+  let result: StoredRead;
+  try {
+    result = readUncached(text, builtin);
+  } catch (e) {
+    // Every check above is meant to refuse what it cannot use with a problem; whatever escapes them
+    // still makes the table unreadable, never an exception (the functions would stay on the table
+    // they had).
+    const detail = e instanceof Error ? `${e.name}: ${e.message}` : String(e);
+    result = fail('damaged', 'the stored table holds something Cellwright cannot check', [detail.length > 300 ? `${detail.slice(0, 299)}…` : detail]);
+  }
   if (typeof text === 'string' && result.ok && result.schema === STORED_SCHEMA) lastRead = { text, result };
   return result;
 }
@@ -211,7 +257,8 @@ function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
   try {
     doc = JSON.parse(text);
   } catch (e) {
-    return fail('not-json', `the stored table is not valid JSON (${e instanceof Error ? e.message : String(e)}); it may have been cut short or edited by hand`);
+    const detail = e instanceof Error ? e.message : String(e);
+    return fail('not-json', 'the stored table is not valid JSON: it may have been cut short or edited by hand', [`JSON reader: ${detail.length > 300 ? `${detail.slice(0, 299)}…` : detail}`]);
   }
   if (!isPlainObject(doc) || doc.format !== STORED_FORMAT) return fail('not-ours', 'the stored value was not written by Cellwright (its format mark is missing or different)');
   const schema = doc.schema;
@@ -231,19 +278,21 @@ function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
   if (extra.length > 0) problems.push(`fields Cellwright does not write: ${extra.map((k) => JSON.stringify(k)).join(', ')}`);
   const missing = allowedTop.filter((k) => !(k in doc));
   if (missing.length > 0) problems.push(`missing fields: ${missing.join(', ')}`);
-  if (typeof doc.basedOn !== 'string' || doc.basedOn.trim() === '') problems.push('"basedOn" is not a version text');
-  if (typeof doc.changedAt !== 'string') problems.push('"changedAt" is not a text');
+  if (!isTableVersion(doc.basedOn)) problems.push('"basedOn" is not a table version such as "2026.1"');
+  if (!isUtcTimestamp(doc.changedAt)) problems.push('"changedAt" is not a time written YYYY-MM-DDTHH:MM:SS.sssZ (ISO 8601, UTC)');
   if (typeof doc.checksum !== 'string' || !/^sha256:[0-9a-f]{64}$/.test(doc.checksum)) problems.push('"checksum" is not "sha256:" and 64 hex digits');
   let revision = 0;
   if (schema >= 2) {
-    if (typeof doc.revision !== 'number' || !Number.isInteger(doc.revision) || doc.revision < 1) problems.push('"revision" is not a whole number ≥ 1');
+    if (typeof doc.revision !== 'number' || !Number.isSafeInteger(doc.revision) || doc.revision < 1 || doc.revision > MAX_REVISION) {
+      problems.push(`"revision" is not a whole number from 1 to ${MAX_REVISION}`);
+    }
     else revision = doc.revision;
   }
   const couples = checkRows('couples', doc.couples, COUPLE_FIELDS, problems);
   const electrodes = checkRows('electrodes', doc.electrodes, ELECTRODE_FIELDS, problems);
   const own = schema >= 2 ? checkKeyLists('own', doc.own, problems) : { couples: [], electrodes: [] };
   const removed = schema >= 2 ? checkKeyLists('removed', doc.removed, problems) : { couples: [], electrodes: [] };
-  if (problems.length > 0) return fail('damaged', `the stored table is damaged: ${problems[0]}`, problems);
+  if (problems.length > 0) return fail('damaged', `the stored table is damaged: ${problems[0]}`, problems.slice(0, 50));
 
   const basedOn = doc.basedOn as string;
   const expected = schema === 1 ? schema1Checksum(basedOn, doc.couples, doc.electrodes) : contentChecksum({ basedOn, couples: couples as never, electrodes: electrodes as never, own, removed });

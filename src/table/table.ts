@@ -9,6 +9,7 @@
 import { parseSpecies } from '../chem/formula';
 import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
 import { CellwrightError } from '../errors';
+import { MAX_FORMULA_CHARS, MAX_KEY_CHARS, MAX_NOTE_CHARS, MAX_SOURCE_CHARS } from '../textLimits';
 import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
 import type { CoupleRecord, ElectrodeRecord } from './records';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from './types';
@@ -85,13 +86,17 @@ function checkNumber(x: unknown, what: string, range: { min: number; max: number
   return x;
 }
 
-function checkText(x: unknown, what: string, problems: string[], required: boolean): string | undefined {
+function checkText(x: unknown, what: string, problems: string[], required: boolean, max: number): string | undefined {
   if (x === undefined || x === null) {
     if (required) problems.push(`${what} is missing`);
     return undefined;
   }
   if (typeof x !== 'string') {
     problems.push(`${what} must be text`);
+    return undefined;
+  }
+  if (x.length > max) {
+    problems.push(`${what} is too long (${x.length} characters; at most ${max})`);
     return undefined;
   }
   if (required && x.trim() === '') {
@@ -114,15 +119,15 @@ function checkText(x: unknown, what: string, problems: string[], required: boole
 export function validateCoupleRecord(record: unknown): Validated<CoupleRow> {
   const problems: string[] = [];
   if (!isObject(record)) return { problems: ['the row is not a record with key, halfReaction, e0 and source'] };
-  const key = checkText(record.key, 'the key', problems, true);
-  const text = checkText(record.halfReaction, 'the half-reaction', problems, true);
+  const key = checkText(record.key, 'the key', problems, true, MAX_KEY_CHARS);
+  const text = checkText(record.halfReaction, 'the half-reaction', problems, true, MAX_FORMULA_CHARS);
   const e0 = checkNumber(record.e0, 'E°', E0_RANGE_V, 'V', problems);
   let dEdT: number | undefined;
   if (record.dEdT_mV_K !== undefined && record.dEdT_mV_K !== null) {
     dEdT = checkNumber(record.dEdT_mV_K, 'dE°/dT', DEDT_RANGE_MV_K, 'mV/K', problems);
   }
-  const source = checkText(record.source, 'the source', problems, true);
-  const note = checkText(record.note, 'the note', problems, false);
+  const source = checkText(record.source, 'the source', problems, true, MAX_SOURCE_CHARS);
+  const note = checkText(record.note, 'the note', problems, false, MAX_NOTE_CHARS);
 
   let parsed: HalfReaction | undefined;
   if (text !== undefined) {
@@ -191,11 +196,13 @@ function keySpecies(text: string, which: string, key: string, problems: string[]
 export function validateElectrodeRecord(record: unknown): Validated<ElectrodeRow> {
   const problems: string[] = [];
   if (!isObject(record)) return { problems: ['the row is not a record with key, aliases, potential and source'] };
-  const key = checkText(record.key, 'the key', problems, true);
+  const key = checkText(record.key, 'the key', problems, true, MAX_KEY_CHARS);
   let aliases: string[] = [];
   if (record.aliases !== undefined && record.aliases !== null) {
     if (!Array.isArray(record.aliases) || record.aliases.some((a) => typeof a !== 'string' || a.trim() === '')) {
       problems.push('the aliases must be a list of non-empty texts');
+    } else if (record.aliases.some((a) => (a as string).length > MAX_KEY_CHARS)) {
+      problems.push(`an other name is too long (at most ${MAX_KEY_CHARS} characters)`);
     } else {
       aliases = (record.aliases as string[]).map((a) => a.trim());
     }
@@ -205,8 +212,8 @@ export function validateElectrodeRecord(record: unknown): Validated<ElectrodeRow
   if (record.dEdT_mV_K !== undefined && record.dEdT_mV_K !== null) {
     dEdT = checkNumber(record.dEdT_mV_K, 'dE/dT', DEDT_RANGE_MV_K, 'mV/K', problems);
   }
-  const source = checkText(record.source, 'the source', problems, true);
-  const note = checkText(record.note, 'the note', problems, false);
+  const source = checkText(record.source, 'the source', problems, true, MAX_SOURCE_CHARS);
+  const note = checkText(record.note, 'the note', problems, false, MAX_NOTE_CHARS);
   if (problems.length > 0 || key === undefined || potential === undefined || source === undefined) return { problems };
   const row: ElectrodeRow = {
     key,

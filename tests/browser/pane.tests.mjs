@@ -584,6 +584,15 @@ export const tests = [
       assert.match(card, /not valid JSON/);
       assert.match(card, /Nothing has been changed or replaced/);
       assert.match(card, /Worksheet functions: answer #N\/A/);
+      // Plain words in view; the JSON reader's own text only inside the closed "Details" disclosure.
+      assert.doesNotMatch(await text(page, '#unreadable-reason'), /position|Expected|Unexpected/);
+      assert.deepEqual(
+        await page.evaluate(() => {
+          const d = document.querySelector('#unreadable-details');
+          return { open: d?.open, summary: d?.querySelector('summary')?.textContent, body: d?.textContent ?? '' };
+        }).then((d) => ({ ...d, body: /JSON reader:/.test(d.body) })),
+        { open: false, summary: 'Details', body: true },
+      );
       const cell = await cellE0(page, 'Cu2+/Cu');
       assert.equal(cell.error, '#N/A');
       assert.match(cell.message, /^the workbook's potential table could not be read: the stored table is not valid JSON/);
@@ -602,6 +611,25 @@ export const tests = [
       assert.equal(await stored(page), null);
       assert.equal(await cellE0(page, 'Cu2+/Cu'), builtinE0('Cu2+/Cu'));
       assert.match(await text(page, '#in-use'), /Built-in table/);
+    },
+  },
+
+  {
+    name: 'a stored table holding a number beyond double range opens as unreadable, with download and reset (not only "read again")',
+    async run({ open }) {
+      const page = await openPane(open);
+      await page.click('#pin');
+      await waitIdle(page);
+      const raw = (await stored(page)).replace(/"e0":0\.3419/, '"e0":1e999');
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, raw]);
+      await reopen(page);
+      const card = await text(page, '#in-use');
+      assert.match(card, /This workbook’s table cannot be read/);
+      assert.match(card, /not a finite number/);
+      assert.equal(await page.isVisible('#raw-download'), true);
+      assert.equal(await page.isVisible('#reset'), true);
+      const cell = await cellE0(page, 'Cu2+/Cu');
+      assert.equal(cell.error, '#N/A');
     },
   },
 

