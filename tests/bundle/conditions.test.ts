@@ -79,11 +79,13 @@ describe('ELECTROWINVOLTAGE and ELECTROWINTHERMONEUTRAL', () => {
 
 describe('E0BASIS', () => {
   it('names the basis of each couple; an unknown couple is #N/A', async () => {
-    const r = await call('E0BASIS', [['O2/H2O'], ['Cu2+/Cu'], ['Au3+/Au'], ['bogus']]);
-    // O2/H2O: every species has Cp° in the NBS 1982 tables; Cu2+ has none; Au3+ is not tabulated
+    const r = await call('E0BASIS', [['O2/H2O'], ['Cu2+/Cu'], ['Au3+/Au'], ['Sn2+/Sn'], ['bogus']]);
+    // O2/H2O: every species has Cp° in the NBS 1982 tables; Cu2+ has none; Au3+ is not tabulated there but
+    // its row carries dE°/dT (data/couples.json); Sn2+ is not tabulated at the standard state and its row has no dE°/dT
     expect(r[0][0]).toBe('species (with ΔrCp)');
     expect(r[1][0]).toBe('species (ΔrCp = 0)');
-    expect(r[2][0]).toBe('25 °C only');
-    expect(isError(r[3][0], '#N/A')).toBe(true);
+    expect(r[2][0]).toBe('dE/dT');
+    expect(r[3][0]).toBe('25 °C only');
+    expect(isError(r[4][0], '#N/A')).toBe(true);
   });
 });
