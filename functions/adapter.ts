@@ -52,6 +52,7 @@
  */
 import { DomainError, InputError, NotFoundError } from '../src/errors';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
+import { coupleKeyHint, electrodeKeyHint } from '../src/table/suggest';
 import { currentTable, tablePending } from './context';
 
 /* ------------------------------------------------------------------------------------------ */
@@ -387,7 +388,7 @@ function memoLookUp<Row>(
   memo: Map<string, Row | CustomFunctions.Error>,
   key: string,
   find: (table: PotentialTable, key: string) => Row | undefined,
-  missing: (key: string) => CustomFunctions.Error,
+  missing: (key: string, table: PotentialTable) => CustomFunctions.Error,
 ): Row | CustomFunctions.Error {
   let table: PotentialTable;
   try {
@@ -402,7 +403,7 @@ function memoLookUp<Row>(
   }
   let hit = memo.get(key);
   if (hit === undefined) {
-    hit = find(table, key) ?? missing(key);
+    hit = find(table, key) ?? missing(key, table);
     if (memo.size >= MEMO_LIMIT) memo.clear();
     memo.set(key, hit);
   }
@@ -414,7 +415,7 @@ function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
     coupleMemo,
     key,
     (t, k) => t.findCouple(k),
-    (k) => notAvailable(`unknown couple ${show(k)}; use a key of the potential table such as "Cu2+/Cu"`),
+    (k, t) => notAvailable(`unknown couple ${show(k)}; ${coupleKeyHint(t, k) || 'use a key of the potential table such as "Cu2+/Cu"'}`),
   );
 }
 
@@ -423,7 +424,7 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
     electrodeMemo,
     key,
     (t, k) => t.findElectrode(k),
-    (k) => notAvailable(`unknown reference electrode ${show(k)}; use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"`),
+    (k, t) => notAvailable(`unknown reference electrode ${show(k)}; ${electrodeKeyHint(t, k) || 'use a key of the electrode table such as "SCE" or "Ag/AgCl/KCl(sat)"'}`),
   );
 }
 

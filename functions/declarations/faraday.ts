@@ -10,7 +10,7 @@
 import * as F from '../families/faraday';
 
 /**
- * Molar mass of a formula in g/mol from IUPAC standard atomic weights; parentheses, square brackets and hydrate dots (·, * or .) understood.
+ * Molar mass of a formula in g/mol from IUPAC standard atomic weights; parentheses, square brackets and hydrate dots (·, * or .) understood. Case matters: a capital starts a new element, so "CO" is carbon monoxide (28.01) and "Co" cobalt (58.93); the deposition functions refuse "NI", "CU", "CO"… and ask which element was meant. Unicode subscripts and superscripts (NiSO₄, Cu²⁺) read as ASCII.
  * @customfunction MOLARMASS
  * @helpurl https://localhost:3000/docs/functions.html#molarmass
  * @param formula Chemical formula, e.g. "NiSO4·6H2O" or "K3[Fe(CN)6]" (element symbols are case-sensitive).

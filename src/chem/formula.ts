@@ -4,7 +4,8 @@
  * A species is a formula with an optional charge and an optional phase mark:
  *   "Cu2+", "Cu^2+", "Cu(2+)", "Cu+2", "MnO4-", "Cr2O7^2-", "SO4--", "H2O(l)", "O2(g)", "Hg2Cl2(s)",
  *   "Ni(OH)2", "Fe(CN)6^3-",
- *   "CuSO4·5H2O" (hydrate dots ·, * or .), and the electron "e-".
+ *   "CuSO4·5H2O" (hydrate dots ·, * or .), and the electron "e-". Unicode subscripts and
+ *   superscripts read as ASCII ("NiSO₄" is "NiSO4", "Cu²⁺" is "Cu2+").
  *
  * Charge rules (the written text decides; element symbols stay case-sensitive):
  *   - "^" introduces the charge: everything after it is digits and signs ("^2+", "^+2", "^3-").
@@ -16,6 +17,7 @@
  *   Write "^" wherever a digit could be read either way ("VO^2+" is vanadyl).
  */
 import { InputError } from '../errors';
+import { asciiFormula } from './asciiFormula';
 import { isElementSymbol } from './elements';
 
 export type Phase = 's' | 'l' | 'g' | 'aq';
@@ -86,7 +88,7 @@ function parseChargeText(t: string): number | undefined {
 
 /** Splits a species text into body, charge and phase. Throws InputError on text it cannot read. */
 export function splitSpecies(text: string): { body: string; charge: number; phase?: Phase; chargeFromDigit?: boolean } {
-  let s = text.replace(/\s+/g, '');
+  let s = asciiFormula(text).replace(/\s+/g, '');
   if (s === '') throw new InputError('a species is empty');
   let phase: Phase | undefined;
   const pm = PHASE_RE.exec(s);

@@ -9,11 +9,12 @@
  *
  * Electrode keys ignore case and white space ("ag/agcl/kcl(sat)" is "Ag/AgCl/KCl(sat)").
  */
+import { asciiFormula } from '../chem/asciiFormula';
 import { parseSpecies } from '../chem/formula';
 
 /** The canonical key of one side of a couple key; the bare text when it is not a species. */
 function sideKey(text: string): string {
-  const bare = text.replace(/\s+/g, '');
+  const bare = asciiFormula(text).replace(/\s+/g, '');
   try {
     return parseSpecies(bare).key;
   } catch {
@@ -58,5 +59,5 @@ export function splitCoupleKey(key: string): { ox: string; red: string } | undef
  * Example: normalizeElectrodeKey(" Ag/AgCl/KCl (sat) ") → "ag/agcl/kcl(sat)"
  */
 export function normalizeElectrodeKey(key: string): string {
-  return key.replace(/\s+/g, '').toLowerCase();
+  return asciiFormula(key).replace(/\s+/g, '').toLowerCase();
 }
