@@ -89,6 +89,12 @@ export const scenario = {
         { key: 'cuRaise', label: 'Raise copper metal by (from the weekly analysis)', value: 4.5, unit: 'g/L' },
         { label: 'The same raise in the supplier\'s units', formula: '=CELLWRIGHT.CONVERTUNIT({cuRaise},"g/L","oz/gal")', unit: 'oz/gal', digits: 3, note: 'avoirdupois ounces per U.S. gallon' },
         { label: 'Copper sulfate pentahydrate to add', formula: '={cuRaise}*{tankL}*{saltM}/{cuM}/1000', unit: 'kg', digits: 1, note: 'dissolve in bath solution in a separate tank; not directly into the plating tank' },
+        { label: 'Copper content of the pentahydrate', formula: '=CELLWRIGHT.METALFRACTION("CuSO4·5H2O","Cu")', unit: 'fraction', digits: 4 },
+        { label: 'The same addition from the make-up function', formula: '=CELLWRIGHT.SALTMASS({cuRaise},{tankL},"CuSO4·5H2O","Cu")', unit: 'kg', digits: 1, note: 'agrees with the line above; divide by the salt\'s assay' },
+        { key: 'cuRinseR', label: 'Rinse flow / drag-out flow after the copper tank', value: 15, unit: '' },
+        { label: 'Dilution across two counterflow rinses', formula: '=CELLWRIGHT.RINSERATIO({cuRinseR},2)', unit: '×', digits: 0, note: 'check the last rinse against the discharge permit' },
+        { key: 'cuAh', label: 'Ampere-hour meter over the 4 dm² panel', formula: '={cuI}*{cuHours}', unit: 'A·h', digits: 1 },
+        { label: 'Average panel thickness from the A·h meter', formula: '=CELLWRIGHT.THICKNESSFROMAH({cuAh},{cuArea},"Cu",{cuN},{cuRho},{cuEff})', unit: 'µm', digits: 1 },
       ],
     },
 
