@@ -20,7 +20,7 @@ export function metalFraction(salt: string, metal: string): number {
   if (slip !== undefined) throw new InputError(`metal "${symbol}" reads as two elements (${slip.read}); did you mean ${slip.element}?`);
   const atoms = parseSpecies(salt).elements[symbol];
   if (atoms === undefined) {
-    throw new NotFoundError(`the salt "${salt}" contains no ${symbol}; give the metal as it is written in the formula (element symbols are case-sensitive)`);
+    throw new NotFoundError(`the salt "${salt}" contains no "${symbol}"; give the metal as it is written in the formula (element symbols are case-sensitive)`);
   }
   return (atoms * atomicWeight(symbol)) / molarMass(salt);
 }

@@ -14,7 +14,7 @@ describe('plating shop', () => {
     expect(r[0][0] as number).toBeCloseTo(0.2233, 4); // nickel sulfate hexahydrate 22.3 % Ni (common practice)
     expect(r[1][0] as number).toBeCloseTo(0.6836, 3); // potassium gold cyanide 68.3 % Au (common practice, from memory)
     expect(isError(r[2][0], '#N/A')).toBe(true);
-    expect((r[2][0] as FakeError).message).toMatch(/contains no Ni/);
+    expect((r[2][0] as FakeError).message).toMatch(/contains no "Ni"/);
   });
   it('SALTMASS for a Watts bath; a negative concentration is an error', async () => {
     // 75 g/L · 1000 L / 0.2233 = 335.9 kg
