@@ -55,6 +55,7 @@ import { numberTextKind } from '../src/numberText';
 import { MAX_NUMBER_CHARS } from '../src/textLimits';
 import { suggestKey } from '../src/table/suggestKey';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
+import { coupleKeyHint, electrodeKeyHint } from '../src/table/suggest';
 import { currentTable, tablePending } from './context';
 
 /* ------------------------------------------------------------------------------------------ */
@@ -440,7 +441,7 @@ function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
     coupleMemo,
     key,
     (t, k) => t.findCouple(k),
-    (k, t) => notAvailable(unknownKeyMessage('couple', 'the potential table', k, t)),
+    (k, t) => { const h = coupleKeyHint(t, k); return notAvailable(h ? `unknown couple ${show(k)}; ${h}` : unknownKeyMessage('couple', 'the potential table', k, t)); },
   );
 }
 
@@ -449,7 +450,7 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
     electrodeMemo,
     key,
     (t, k) => t.findElectrode(k),
-    (k, t) => notAvailable(unknownKeyMessage('reference electrode', 'the electrode table', k, t)),
+    (k, t) => { const h = electrodeKeyHint(t, k); return notAvailable(h ? `unknown reference electrode ${show(k)}; ${h}` : unknownKeyMessage('reference electrode', 'the electrode table', k, t)); },
   );
 }
 

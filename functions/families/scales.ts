@@ -2,12 +2,14 @@
 import { convertPotential } from '../../src/scales/convertPotential';
 import { refPotential } from '../../src/scales/refPotential';
 import { resolveScale } from '../../src/scales/resolveScale';
+import { electrodeKeyHint } from '../../src/table/suggest';
 import type { ElectrodeRow } from '../../src/table/types';
 import { type ArgSpec, domains, worksheet } from '../adapter';
 import { potential, temperatureC } from '../args';
 import { currentTable } from '../context';
 
 const findElectrode = (key: string): ElectrodeRow | undefined => currentTable().findElectrode(key);
+const electrodeHint = (key: string): string => electrodeKeyHint(currentTable(), key);
 
 const scaleArg = (name: string): ArgSpec => ({ name, kind: 'text' });
 
@@ -28,6 +30,6 @@ export const CONVERTPOTENTIAL = worksheet({
     temperatureC,
   ],
   compute: (e: number, from: string, to: string, pH: number | null, t: number) =>
-    convertPotential(e, resolveScale(from, findElectrode), resolveScale(to, findElectrode), pH, t),
+    convertPotential(e, resolveScale(from, findElectrode, electrodeHint), resolveScale(to, findElectrode, electrodeHint), pH, t),
   usesTable: true,
 });

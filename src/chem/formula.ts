@@ -4,7 +4,8 @@
  * A species is a formula with an optional charge and an optional phase mark:
  *   "Cu2+", "Cu^2+", "Cu(2+)", "Cu+2", "MnO4-", "Cr2O7^2-", "SO4--", "H2O(l)", "O2(g)", "Hg2Cl2(s)",
  *   "Ni(OH)2", "Fe(CN)6^3-",
- *   "CuSO4·5H2O" (hydrate dots ·, * or .), and the electron "e-".
+ *   "CuSO4·5H2O" (hydrate dots ·, * or .), and the electron "e-". Unicode subscripts and
+ *   superscripts read as ASCII ("NiSO₄" is "NiSO4", "Cu²⁺" is "Cu2+").
  *
  * Charge rules (the written text decides; element symbols stay case-sensitive):
  *   - "^" introduces the charge: everything after it is digits and signs ("^2+", "^+2", "^3-").
@@ -17,6 +18,7 @@
  */
 import { InputError } from '../errors';
 import { MAX_FORMULA_CHARS } from '../textLimits';
+import { asciiFormula } from './asciiFormula';
 import { isElementSymbol } from './elements';
 
 export type Phase = 's' | 'l' | 'g' | 'aq';
@@ -123,7 +125,7 @@ function signsThenDigits(s: string): { sign: string; digits: string; at: number 
 /** Splits a species text into body, charge and phase. Throws InputError on text it cannot read. */
 export function splitSpecies(text: string): { body: string; charge: number; phase?: Phase; chargeFromDigit?: boolean } {
   if (text.length > MAX_FORMULA_CHARS) throw new InputError(`a species is too long (${text.length} characters; at most ${MAX_FORMULA_CHARS})`);
-  let s = text.replace(/\s+/g, '');
+  let s = asciiFormula(text).replace(/\s+/g, '');
   if (s === '') throw new InputError('a species is empty');
   let phase: Phase | undefined;
   const pm = PHASE_RE.exec(s);

@@ -1,18 +1,50 @@
-import { DomainError } from '../errors';
+import { asciiFormula } from '../chem/asciiFormula';
+import { isElementSymbol } from '../chem/elements';
+import { DomainError, InputError } from '../errors';
 import { molarMass } from './molarMass';
 
 /**
- * Molar mass in g/mol of a species argument: a formula text (see molarMass) or a number read as
- * the molar mass itself (> 0).
+ * Molar mass in g/mol of a species argument of the deposition functions: a formula text (see
+ * molarMass) or a number read as the molar mass itself (> 0).
+ *
+ * A deposit is a metal, so a text of two capitals that names two elements but one element symbol
+ * when its second letter is lower case ("NI", "CU", "SN", "PB", "CO") is taken as a typing slip and
+ * refused with the element it probably means, instead of being read silently as a compound
+ * (N + I is 140.9 g/mol, Ni 58.69). MOLARMASS itself keeps the formula reading (CO is carbon monoxide).
  *
  * Syntax: speciesMolarMass(species)
- * Example: speciesMolarMass("Ni") → 58.693; speciesMolarMass(58.69) → 58.69
- * See also: molarMass
+ * Example: speciesMolarMass("Ni") → 58.693; speciesMolarMass(58.69) → 58.69; speciesMolarMass("NI") → InputError "did you mean Ni?"
+ * See also: molarMass, miscapitalisedElement
  */
 export function speciesMolarMass(species: string | number): number {
   if (typeof species === 'number') {
     if (!(species > 0) || !Number.isFinite(species)) throw new DomainError('a molar mass must be a finite number > 0');
     return species;
   }
+  const meant = miscapitalisedElement(species);
+  if (meant !== undefined) {
+    throw new InputError(
+      `"${species.trim()}" reads as two elements (${meant.read}); did you mean ${meant.element}? Element symbols are case-sensitive: write "${meant.element}", or a molar mass in g/mol`,
+    );
+  }
   return molarMass(species);
+}
+
+/**
+ * When a species text is two capital letters (a charge or phase mark may follow) that are two
+ * element symbols and whose re-capitalised form is one element symbol, the element meant and the
+ * reading it would otherwise get; else undefined.
+ *
+ * Syntax: miscapitalisedElement(text)
+ * Example: miscapitalisedElement("NI") → { element: "Ni", read: "N + I" }; miscapitalisedElement("Ni") → undefined
+ * See also: speciesMolarMass
+ */
+export function miscapitalisedElement(text: string): { element: string; read: string } | undefined {
+  const m = /^([A-Z])([A-Z])(?![a-z])(.*)$/.exec(asciiFormula(text).replace(/\s+/g, ''));
+  if (m === null) return undefined;
+  // only the two letters, with at most a charge or phase mark after them (no counts: "NI3" is a formula)
+  if (m[3] !== '' && !/^(\^?\d*[+-]+\d*|\((?:\d*[+-]+|s|l|g|aq|cr|c)\))$/.test(m[3])) return undefined;
+  const element = m[1] + m[2].toLowerCase();
+  if (!isElementSymbol(m[1]) || !isElementSymbol(m[2]) || !isElementSymbol(element)) return undefined;
+  return { element, read: `${m[1]} + ${m[2]}` };
 }

@@ -10,6 +10,7 @@
  * Electrode keys ignore case and white space ("ag/agcl/kcl(sat)" is "Ag/AgCl/KCl(sat)").
  */
 import { isElementSymbol } from '../chem/elements';
+import { asciiFormula } from '../chem/asciiFormula';
 import { parseSpecies } from '../chem/formula';
 import { MAX_KEY_CHARS } from '../textLimits';
 
@@ -37,7 +38,7 @@ const SIDE_MEMO = 4096;
 function sideKey(text: string): string {
   let k = sideMemo.get(text);
   if (k !== undefined) return k;
-  const bare = text.replace(/\s+/g, '');
+  const bare = asciiFormula(text).replace(/\s+/g, '');
   if (!symbolsReadable(bare)) k = bare;
   else {
     try {
@@ -91,5 +92,5 @@ export function splitCoupleKey(key: string): { ox: string; red: string } | undef
  * Example: normalizeElectrodeKey(" Ag/AgCl/KCl (sat) ") → "ag/agcl/kcl(sat)"
  */
 export function normalizeElectrodeKey(key: string): string {
-  return key.replace(/\s+/g, '').toLowerCase();
+  return asciiFormula(key).replace(/\s+/g, '').toLowerCase();
 }
