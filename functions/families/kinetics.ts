@@ -15,26 +15,68 @@ const i0: ArgSpec = num('i0', domains.positive, 'any current-density unit');
 
 export const BUTLERVOLMER = worksheet({
   id: 'BUTLERVOLMER',
-  args: [i0, num('overpotential_V', domains.any, 'V'), alphaA, alphaC, temperatureC],
+  description: 'Butler–Volmer current density i0·[exp(αa·Fη/RT) − exp(−αc·Fη/RT)], in i0\'s units (anodic positive).',
+  args: [
+    { ...i0, help: 'Exchange current density (> 0), in any current-density unit.' },
+    { ...num('overpotential_V', domains.any, 'V'), help: 'Overpotential, in V.' },
+    { ...alphaA, help: 'Apparent anodic transfer coefficient (> 0, n included).' },
+    { ...alphaC, help: 'Apparent cathodic transfer coefficient (> 0; default 1 − alpha_a).' },
+    temperatureC,
+  ],
+  result: 'Current density in i0\'s units.',
+  helpAnchor: 'butlervolmer',
   compute: butlerVolmer,
 });
 
 export const OVERPOTENTIAL = worksheet({
   id: 'OVERPOTENTIAL',
-  args: [num('i', domains.any, "i0's unit"), i0, alphaA, alphaC, temperatureC],
+  description: 'Overpotential that gives a current density by Butler–Volmer (its inverse, solved to 1e-9 V), in V.',
+  args: [
+    { ...num('i', domains.any, "i0's unit"), help: 'Current density, in i0\'s units (anodic positive, cathodic negative).' },
+    { ...i0, help: 'Exchange current density (> 0).' },
+    { ...alphaA, help: 'Apparent anodic transfer coefficient (> 0, n included).' },
+    { ...alphaC, help: 'Apparent cathodic transfer coefficient (> 0; default 1 − alpha_a).' },
+    temperatureC,
+  ],
+  result: 'Overpotential in V.',
+  helpAnchor: 'overpotential',
   compute: overpotential,
 });
 
-export const TAFELSLOPE = worksheet({ id: 'TAFELSLOPE', args: [num('alpha', domains.positive, ''), temperatureC], compute: tafelSlope });
+export const TAFELSLOPE = worksheet({
+  id: 'TAFELSLOPE',
+  description: 'Tafel slope RT·ln10/(αF), in V per decade (0.118 V for α = 0.5 at 25 °C).',
+  args: [
+    { ...num('alpha', domains.positive, ''), help: 'Apparent transfer coefficient (> 0, n included).' },
+    temperatureC,
+  ],
+  result: 'V per decade.',
+  helpAnchor: 'tafelslope',
+  compute: tafelSlope,
+});
 
 export const CORROSIONRATE = worksheet({
   id: 'CORROSIONRATE',
-  args: [num('icorr_uA_cm2', domains.nonNegative, 'µA/cm²'), num('equivalent_weight_g', domains.positive, 'g'), num('density_g_cm3', domains.positive, 'g/cm³')],
+  description: 'Uniform corrosion penetration rate K1·icorr·EW/ρ (Faraday\'s law, K1 of ASTM G102), in mm/year.',
+  args: [
+    { ...num('icorr_uA_cm2', domains.nonNegative, 'µA/cm²'), help: 'Corrosion current density, in µA/cm².' },
+    { ...num('equivalent_weight_g', domains.positive, 'g'), help: 'Equivalent weight, in g (molar mass over electrons per atom; 27.92 for iron).' },
+    { ...num('density_g_cm3', domains.positive, 'g/cm³'), help: 'Density of the metal, in g/cm³.' },
+  ],
+  result: 'Penetration rate in mm/year.',
+  helpAnchor: 'corrosionrate',
   compute: corrosionRate,
 });
 
 export const STERNGEARY = worksheet({
   id: 'STERNGEARY',
-  args: [num('beta_a_V', domains.positive, 'V/decade'), num('beta_c_V', domains.positive, 'V/decade'), num('polarization_resistance_ohm_cm2', domains.positive, 'Ω·cm²')],
+  description: 'Corrosion current density from linear polarization (Stern–Geary), B/Rp with B = βa·βc/(2.303·(βa + βc)), in µA/cm².',
+  args: [
+    { ...num('beta_a_V', domains.positive, 'V/decade'), help: 'Anodic Tafel slope, in V per decade.' },
+    { ...num('beta_c_V', domains.positive, 'V/decade'), help: 'Cathodic Tafel slope (its magnitude), in V per decade.' },
+    { ...num('polarization_resistance_ohm_cm2', domains.positive, 'Ω·cm²'), help: 'Polarization resistance, in Ω·cm².' },
+  ],
+  result: 'Corrosion current density in µA/cm².',
+  helpAnchor: 'sterngeary',
   compute: sternGeary,
 });
