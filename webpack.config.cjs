@@ -29,7 +29,7 @@ module.exports = (env, argv) => {
     target: ['web', 'es2020'],
     entry: {
       functions: ['./functions/entry.ts', ...declarations],
-      taskpane: './taskpane/taskpane.ts',
+      taskpane: './taskpane/main.ts',
     },
     output: {
       path: path.resolve(__dirname, 'dist'),
