@@ -16,7 +16,7 @@
  *     and the workbook recalculated.
  */
 import { installFunctionsHost, isCurrent, lastStoredValue, startTableLoad, useStoredValue } from './workbookHost';
-import { TABLE_SETTING_KEY, readStoredValue, recalculateAll, sameStoredValue } from './workbookStore';
+import { TABLE_SETTING_KEY, readStoredValue, recalculateAll, sameStoredValue } from '../workbook/store';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
 export const START_TIMEOUT_MS = 60_000;

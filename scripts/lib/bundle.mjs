@@ -54,7 +54,7 @@ function newestSource(dirs) {
 
 /**
  * Builds dist/ with the production build when it is missing or older than the sources
- * (src/, functions/, data/). Returns a line describing what was done, for the caller to print.
+ * (src/, workbook/, functions/, data/). Returns a line describing what was done, for the caller to print.
  * A failed rebuild over an existing dist/ keeps the old bundle and says so; a failed first build
  * throws.
  */
@@ -62,7 +62,7 @@ export function ensureBuilt({ quiet = false } = {}) {
   const js = resolve(DIST, 'functions.js');
   const json = resolve(DIST, 'functions.json');
   const present = existsSync(js) && existsSync(json);
-  const stale = present && newestSource(['src', 'functions', 'data']) > Math.min(statSync(js).mtimeMs, statSync(json).mtimeMs);
+  const stale = present && newestSource(['src', 'workbook', 'functions', 'data']) > Math.min(statSync(js).mtimeMs, statSync(json).mtimeMs);
   if (present && !stale) return 'using the existing production build in dist/';
   const why = present ? 'dist/ is older than the sources' : 'dist/ has no functions bundle yet';
   if (!quiet) process.stderr.write(`Building the functions bundle (${why}) …\n`);

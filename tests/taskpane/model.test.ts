@@ -8,7 +8,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { STDPOTENTIAL } from '../../functions/families/table';
 import { installFunctionsHost, useStoredValue } from '../../functions/workbookHost';
-import { TABLE_SETTING_KEY } from '../../functions/workbookStore';
+import { TABLE_SETTING_KEY } from '../../workbook/store';
 import { exportCsv, importCsv } from '../../src/store/csv';
 import { type VersionedRecords } from '../../src/store/rows';
 import { contentChecksum, forgetLastRead, writeSchema1Text, writeStoredText } from '../../src/store/stored';

@@ -13,7 +13,7 @@
  * told that too. A stored value that cannot be read is never written over except by an explicit reset
  * that names the exact value it replaces.
  */
-import { type WorkbookCopy } from '../src/store/copy';
+import type { WorkbookCopy } from '../src/store/copy';
 import type { VersionedRecords } from '../src/store/rows';
 import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } from '../src/store/stored';
 
