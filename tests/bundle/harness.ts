@@ -1,9 +1,9 @@
 /**
  * The test suite's view of the production bundle. Loading is done by the one loader,
- * scripts/lib/bundle.mjs (also used by the demo and the reference generator): dist/functions.js
- * evaluated in node:vm with nothing but a CustomFunctions global (no Office, Excel, window,
- * document), calls by id with every declared parameter passed (null for omitted ones) and an
- * invocation object appended last.
+ * scripts/lib/bundle.mjs (also used by the demo, the reference generator and the benchmark):
+ * dist/functions.js evaluated with a CustomFunctions global (in this process's context, or alone in
+ * node:vm when a test gives extra globals or asks for isolation), calls by id with every declared
+ * parameter passed (null for omitted ones) and an invocation object appended last.
  */
 import { DIST, ErrorCode, FakeError, type FunctionMetadata, type LoadedBundle, loadBundle } from '../../scripts/lib/bundle.mjs';
 

@@ -1,5 +1,5 @@
 /**
- * Issue 6, the stored table: the reader (src/store/stored.ts, readStoredText) is fed damaged,
+ * The stored table: the reader (src/store/stored.ts, readStoredText) is fed damaged,
  * truncated, oversized and foreign content. It must answer every input without throwing, refuse
  * what it cannot use with a problem of a known kind and a one-line message in plain words, change
  * nothing it was given (the built-in records are frozen), and accept only tables that are whole:
