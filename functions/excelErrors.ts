@@ -89,7 +89,7 @@ export function isErrorValue(v: unknown): v is CustomFunctions.Error {
 }
 
 /** Error codes Excel accepts as a custom function's input but not as its result. */
-function inputOnly(code: string): boolean {
+function inputOnly(code: CustomFunctions.ErrorCode): boolean {
   return code === codes().invalidReference || code === codes().invalidName;
 }
 
@@ -100,14 +100,14 @@ function inputOnly(code: string): boolean {
  * argument.
  */
 export function asResultError(e: CustomFunctions.Error, name: string): CustomFunctions.Error {
-  const code = e.code as string;
+  const code = e.code;
   if (inputOnly(code)) return invalidValue(`${name} comes from a cell showing ${code}`);
   if (e instanceof errorClass()) return e;
   const message: unknown = (e as { message?: unknown }).message;
   const Err = errorClass();
   if (code === codes().invalidValue || code === codes().notAvailable) {
     const text = typeof message === 'string' && message.trim() !== '' ? message : `${name} comes from a cell showing ${code}`;
-    return new Err(code as CustomFunctions.ErrorCode, tidyMessage(text));
+    return new Err(code, tidyMessage(text));
   }
-  return code === codes().invalidNumber ? invalidNumber() : new Err(code as CustomFunctions.ErrorCode);
+  return code === codes().invalidNumber ? invalidNumber() : new Err(code);
 }

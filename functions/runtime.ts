@@ -50,7 +50,7 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
       },
       (e: unknown) => {
         clearTimeout(timer);
-        reject(e);
+        reject(e instanceof Error ? e : new Error(String(e)));
       },
     );
   });

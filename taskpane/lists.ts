@@ -108,7 +108,7 @@ export function focusRowButton(kind: RowKind, key: string | null, cls = 'edit'):
     const k = matchKey(kind, key);
     for (const li of Array.from(byId(`list-${kind}`).children) as HTMLElement[]) {
       if (li.dataset.key !== undefined && matchKey(kind, li.dataset.key) === k) {
-        (li.querySelector(`button.${cls}`) as HTMLButtonElement | null)?.focus();
+        li.querySelector<HTMLButtonElement>(`button.${cls}`)?.focus();
         return;
       }
     }

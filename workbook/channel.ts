@@ -26,8 +26,6 @@ export interface CellwrightFunctionsHost {
 }
 
 declare global {
-  // A global declared for the functions bundle to set and the pane to read must be written with var.
-  // eslint-disable-next-line no-var
   var cellwrightFunctionsHost: CellwrightFunctionsHost | undefined;
 }
 

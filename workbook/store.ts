@@ -32,7 +32,8 @@ export async function readStoredValue(): Promise<unknown> {
     const item = context.workbook.settings.getItemOrNullObject(TABLE_SETTING_KEY);
     item.load('value');
     await context.sync();
-    return item.isNullObject ? null : item.value;
+    const value: unknown = item.isNullObject ? null : item.value;
+    return value;
   });
 }
 
@@ -91,7 +92,7 @@ async function replaceValue(seen: unknown, next: string | null, builtin: Version
     const item = settings.getItemOrNullObject(TABLE_SETTING_KEY);
     item.load('value');
     await context.sync();
-    const current = item.isNullObject ? null : item.value;
+    const current: unknown = item.isNullObject ? null : item.value;
     if (!sameStoredValue(current, seen)) return { changed: true as const, current };
     if (next === null) {
       if (!item.isNullObject) item.delete();

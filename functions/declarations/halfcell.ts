@@ -2,7 +2,6 @@
 // JSDoc for custom-functions-metadata-plugin (dist/functions.json and the associate calls); each
 // body is one call into the adapter-built function. Parameters and results are any[][]: a
 // single value or a range in, a 2-D array that spills out (the metadata generator reads the type).
-/* eslint-disable @typescript-eslint/no-explicit-any */
 import * as F from '../families/halfcell';
 
 /**

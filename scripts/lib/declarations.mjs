@@ -57,7 +57,6 @@ export function renderDeclarations(families) {
       '// JSDoc for custom-functions-metadata-plugin (dist/functions.json and the associate calls); each',
       '// body is one call into the adapter-built function. Parameters and results are any[][]: a',
       '// single value or a range in, a 2-D array that spills out (the metadata generator reads the type).',
-      '/* eslint-disable @typescript-eslint/no-explicit-any */',
       `import * as F from '../families/${family}';`,
       '',
       specs.map(declaration).join('\n\n'),

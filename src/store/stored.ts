@@ -184,7 +184,7 @@ function checkKeyLists(name: string, x: unknown, problems: string[]): KeyLists {
     problems.push(`"${name}" is not { couples: [keys], electrodes: [keys] }`);
     return { couples: [], electrodes: [] };
   }
-  return { couples: x.couples as string[], electrodes: x.electrodes as string[] };
+  return { couples: x.couples, electrodes: x.electrodes };
 }
 
 /**

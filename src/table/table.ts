@@ -10,7 +10,6 @@ import { parseSpecies } from '../chem/formula';
 import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
 import { CellwrightError } from '../errors';
 import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
-import type { CoupleRecord, ElectrodeRecord } from './records';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from './types';
 import { quote } from '../text/quote';
 import { shorten } from '../text/shorten';

@@ -1,23 +1,16 @@
 /**
- * Faraday's law: MOLARMASS, ECEQUIV, DEPOSITMASS, DEPOSITTIME, PLATETHICKNESS, PLATETIME, CURRENTEFFICIENCY, SPECIFICENERGY and GASVOLUME through the production bundle, called the way Excel calls them: every declared
- * parameter, null for omitted ones, ranges as 2-D arrays.
+ * Faraday's law (MOLARMASS, ECEQUIV, DEPOSITMASS, DEPOSITTIME, PLATETHICKNESS, PLATETIME,
+ * CURRENTEFFICIENCY, SPECIFICENERGY, GASVOLUME) through the production bundle, called the way Excel
+ * calls them: every declared parameter, null for omitted ones, ranges as 2-D arrays.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, FakeError, isError, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-
-/** Awaits a result that may be a promise (table look-ups wait for the workbook's table). */
-async function run(id: string, ...args: unknown[]): Promise<unknown> {
-  return await b.call(id, ...args);
-}
+const { bundle, run } = bundleUnderTest();
 
 describe('metadata', () => {
   it('declares the family with its argument names', () => {
-    const byId = new Map(b.metadata.functions.map((f) => [f.id, f]));
+    const byId = new Map(bundle().metadata.functions.map((f) => [f.id, f]));
     for (const id of ['MOLARMASS', 'ECEQUIV', 'DEPOSITMASS', 'DEPOSITTIME', 'PLATETHICKNESS', 'PLATETIME', 'CURRENTEFFICIENCY', 'SPECIFICENERGY', 'GASVOLUME']) expect(byId.has(id), id).toBe(true);
     const names = (id: string) => byId.get(id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
     expect(names('PLATETHICKNESS')).toBe('current_density_A_dm2, time_min, species, n, density_g_cm3, [efficiency]');

@@ -1,23 +1,16 @@
 /**
- * kinetics and corrosion: BUTLERVOLMER, OVERPOTENTIAL, TAFELSLOPE, CORROSIONRATE and STERNGEARY through the production bundle, called the way Excel calls them: every declared
- * parameter, null for omitted ones, ranges as 2-D arrays.
+ * Kinetics and corrosion (BUTLERVOLMER, OVERPOTENTIAL, TAFELSLOPE, CORROSIONRATE,
+ * STERNGEARY) through the production bundle, called the way
+ * Excel calls them: every declared parameter, null for omitted ones, ranges as 2-D arrays.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, FakeError, isError, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-
-/** Awaits a result that may be a promise (table look-ups wait for the workbook's table). */
-async function run(id: string, ...args: unknown[]): Promise<unknown> {
-  return await b.call(id, ...args);
-}
+const { bundle, run } = bundleUnderTest();
 
 describe('metadata', () => {
   it('declares the family with its argument names', () => {
-    const byId = new Map(b.metadata.functions.map((f) => [f.id, f]));
+    const byId = new Map(bundle().metadata.functions.map((f) => [f.id, f]));
     for (const id of ['BUTLERVOLMER', 'OVERPOTENTIAL', 'TAFELSLOPE', 'CORROSIONRATE', 'STERNGEARY']) expect(byId.has(id), id).toBe(true);
     const names = (id: string) => byId.get(id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
     expect(names('OVERPOTENTIAL')).toBe('i, i0, alpha_a, [alpha_c], [temperature_C]');

@@ -1,23 +1,15 @@
 /**
- * REFPOTENTIAL and CONVERTPOTENTIAL through the production bundle, called the way Excel calls them: every declared
- * parameter, null for omitted ones, ranges as 2-D arrays.
+ * Reference scales (REFPOTENTIAL, CONVERTPOTENTIAL) through the production bundle, called the way
+ * Excel calls them: every declared parameter, null for omitted ones, ranges as 2-D arrays.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, FakeError, isError, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-
-/** Awaits a result that may be a promise (table look-ups wait for the workbook's table). */
-async function run(id: string, ...args: unknown[]): Promise<unknown> {
-  return await b.call(id, ...args);
-}
+const { bundle, run } = bundleUnderTest();
 
 describe('metadata', () => {
   it('declares the family with its argument names', () => {
-    const byId = new Map(b.metadata.functions.map((f) => [f.id, f]));
+    const byId = new Map(bundle().metadata.functions.map((f) => [f.id, f]));
     for (const id of ['REFPOTENTIAL', 'CONVERTPOTENTIAL']) expect(byId.has(id), id).toBe(true);
     const names = (id: string) => byId.get(id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
     expect(names('CONVERTPOTENTIAL')).toBe('potential_V, from_scale, to_scale, [pH], [temperature_C]');

@@ -1,23 +1,15 @@
 /**
- * solutions: IONICSTRENGTH, ACTIVITYCOEF and MEANACTIVITYCOEF through the production bundle, called the way Excel calls them: every declared
- * parameter, null for omitted ones, ranges as 2-D arrays.
+ * Solutions (IONICSTRENGTH, ACTIVITYCOEF, MEANACTIVITYCOEF) through the production bundle, called the way
+ * Excel calls them: every declared parameter, null for omitted ones, ranges as 2-D arrays.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, isError, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-
-/** Awaits a result that may be a promise (table look-ups wait for the workbook's table). */
-async function run(id: string, ...args: unknown[]): Promise<unknown> {
-  return await b.call(id, ...args);
-}
+const { bundle, run } = bundleUnderTest();
 
 describe('metadata', () => {
   it('declares the family with its argument names', () => {
-    const byId = new Map(b.metadata.functions.map((f) => [f.id, f]));
+    const byId = new Map(bundle().metadata.functions.map((f) => [f.id, f]));
     for (const id of ['IONICSTRENGTH', 'ACTIVITYCOEF', 'MEANACTIVITYCOEF']) expect(byId.has(id), id).toBe(true);
     const names = (id: string) => byId.get(id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
     expect(names('MEANACTIVITYCOEF')).toBe('z_cation, z_anion, ionic_strength, [model], [temperature_C], [ion_size_A]');

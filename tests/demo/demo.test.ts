@@ -25,8 +25,8 @@ let bundle: LoadedBundle;
 /** A cell's stored value as the evaluator sees it: formulas give their cached result. */
 function stored(cell: ExcelJS.Cell): Scalar {
   let v = cell.value as unknown;
-  if (v !== null && typeof v === 'object' && 'formula' in (v as object)) v = (v as { result?: unknown }).result ?? null;
-  if (v !== null && typeof v === 'object' && 'error' in (v as object)) return { code: String((v as { error: unknown }).error) };
+  if (v !== null && typeof v === 'object' && 'formula' in (v)) v = (v as { result?: unknown }).result ?? null;
+  if (v !== null && typeof v === 'object' && 'error' in (v)) return { code: String((v).error) };
   if (v === undefined) return null;
   return v as Scalar;
 }
@@ -184,7 +184,7 @@ describe('demo/cellwright-demo.xlsx', () => {
     const errors: string[] = [];
     for (const ws of wb.worksheets) {
       for (const f of formulaCells(ws)) {
-        const cells = Array.isArray(f.cached) ? (f.cached as Scalar[][]).flat() : [f.cached as Scalar];
+        const cells = Array.isArray(f.cached) ? (f.cached as Scalar[][]).flat() : [f.cached];
         if (cells.some((v) => isErrorValue(v)) && !expected.has(`${f.sheet}!${f.addr}`)) errors.push(`${f.sheet}!${f.addr} =${f.formula}`);
       }
     }

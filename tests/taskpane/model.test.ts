@@ -28,7 +28,7 @@ function model(b: VersionedRecords = B): TableModel {
 
 /** What a cell =CELLWRIGHT.STDPOTENTIAL(key) shows now. */
 async function cellE0(key: string): Promise<unknown> {
-  const r = (await STDPOTENTIAL([[key]], null as never)) as unknown[][];
+  const r = (await STDPOTENTIAL([[key]], null)) as unknown[][];
   return r[0][0];
 }
 
