@@ -8,14 +8,7 @@ const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
 const fs = require('fs');
-const { ProvidePlugin } = require('webpack');
 const { DeployBasePlugin, deployBase } = require('./scripts/lib/deployBase.cjs');
-
-// Built-ins bound once per bundle instead of looked up on the global object at every use (see
-// functions/intrinsics.ts: in node:vm, where the tests and the benchmark load the bundle, each
-// global look-up costs ~150 ns).
-const intrinsics = path.resolve(__dirname, 'functions/intrinsics.ts');
-const provided = Object.fromEntries(['Math', 'Number', 'Array', 'Object', 'String', 'JSON', 'Map', 'Set'].map((n) => [n, [intrinsics, n]]));
 
 // Every file in functions/declarations/ declares one family of worksheet functions.
 const declarations = fs
@@ -37,7 +30,7 @@ module.exports = (env, argv) => {
     target: ['web', 'es2020'],
     entry: {
       functions: ['./functions/entry.ts', ...declarations],
-      taskpane: './taskpane/taskpane.ts',
+      taskpane: './taskpane/main.ts',
     },
     output: {
       path: path.resolve(__dirname, 'dist'),
@@ -51,7 +44,6 @@ module.exports = (env, argv) => {
     },
     performance: { hints: false },
     plugins: [
-      new ProvidePlugin(provided),
       new CustomFunctionsMetadataPlugin({ output: 'functions.json', input: declarations }),
       new HtmlWebpackPlugin({
         filename: 'taskpane.html',

@@ -1,6 +1,8 @@
 /**
  * Argument declarations shared by many worksheet functions (name, kind, default, domain, unit).
- * Declaring them once keeps names, defaults and domains identical across the families.
+ * Declaring them once keeps names, defaults and domains identical across the families. A family
+ * gives each argument its help text, `{ ...num('Q', domains.positive), help: 'Reaction quotient
+ * (> 0).' }`; temperatureC and electrons carry a help text that most functions share.
  */
 import { DEFAULT_TEMPERATURE_C } from '../src/constants';
 import { type ArgSpec, domains } from './adapter';
@@ -13,10 +15,17 @@ export const temperatureC: ArgSpec = {
   default: DEFAULT_TEMPERATURE_C,
   domain: domains.temperature,
   unit: '°C',
+  help: 'Temperature in °C (default 25).',
 };
 
 /** Electrons transferred: a whole number ≥ 1. */
-export const electrons: ArgSpec = { name: 'n', kind: 'number', domain: domains.positiveInteger, unit: '' };
+export const electrons: ArgSpec = {
+  name: 'n',
+  kind: 'number',
+  domain: domains.positiveInteger,
+  unit: '',
+  help: 'Electrons transferred (a whole number ≥ 1).',
+};
 
 /** A potential in V (any finite number). */
 export function potential(name = 'potential_V'): ArgSpec {

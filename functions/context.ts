@@ -2,8 +2,8 @@
  * Which potential table the worksheet functions use.
  *
  * - At start the built-in table is in use.
- * - When a workbook can be reached (shared runtime), the loader (functions/workbook.ts, issue 4)
- *   calls `beginTableLoad(promise)`: functions that read the table wait on it, so no cell ever
+ * - When a workbook can be reached (shared runtime), the start-up (functions/runtime.ts, through
+ *   functions/workbookHost.ts) calls `beginTableLoad(promise)`: functions that read the table wait on it, so no cell ever
  *   shows a value computed from the built-in table when the workbook has its own.
  * - An unreadable workbook table makes every look-up answer #N/A with the reason; it never
  *   falls back to the built-in table silently.

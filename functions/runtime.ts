@@ -21,7 +21,7 @@
  *     elsewhere) do not stay in the cells silently.
  */
 import { hostStatus, installFunctionsHost, installReadFailure, installStoredValue, lastStoredValue, readTicket, startTableLoad } from './workbookHost';
-import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll, sameStoredValue } from './workbookStore';
+import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll, sameStoredValue } from '../workbook/store';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
 export const START_TIMEOUT_MS = 60_000;
@@ -63,7 +63,7 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
       },
       (e: unknown) => {
         clearTimeout(timer);
-        reject(e);
+        reject(e instanceof Error ? e : new Error(String(e)));
       },
     );
   });

@@ -1,5 +1,6 @@
 /**
- * The channel between the task pane and the worksheet functions.
+ * The worksheet functions' side of the channel between the task pane and the functions (the contract,
+ * its types and the global's name, is workbook/channel.ts).
  *
  * In Excel's shared runtime the page loads functions.js and taskpane.js as two bundles with separate
  * module instances, so the pane cannot reach functions/context.ts by import. The functions bundle
@@ -16,39 +17,14 @@
  *
  * The pane passes the value it just wrote or read, never a table object, so the functions check it
  * themselves and both sides agree on what the workbook holds. Nothing else crosses the channel; the
- * caller recalculates afterwards (functions/workbookStore.ts, recalculateAll).
+ * caller recalculates afterwards (workbook/store.ts, recalculateAll).
  */
 import { recordsOf } from '../src/store/rows';
 import { InstallOrder } from '../src/store/installOrder';
 import { type StoredRead, builtinChecksum, readStoredText } from '../src/store/stored';
 import { builtinTable } from '../src/table/builtin';
+import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../workbook/channel';
 import { type TableInUse, beginTableLoad, setTableInUse, tableInUse, tablePending } from './context';
-
-export interface FunctionsHostStatus {
-  /** loading: the workbook's table is being read at start-up (table look-ups wait). */
-  readonly state: 'loading' | 'builtin' | 'workbook' | 'unreadable';
-  /** Built-in version in use, or the version the workbook's table is based on. */
-  readonly version?: string;
-  /** The workbook table's revision. */
-  readonly revision?: number;
-  /** "sha256:…" of the table in use. */
-  readonly checksum?: string;
-  readonly couples?: number;
-  readonly electrodes?: number;
-  /** Why the workbook's table could not be read (state "unreadable"). */
-  readonly reason?: string;
-}
-
-export interface CellwrightFunctionsHost {
-  readonly apiVersion: 1;
-  useStoredValue(value: unknown): FunctionsHostStatus;
-  status(): FunctionsHostStatus;
-}
-
-declare global {
-  // eslint-disable-next-line no-var
-  var cellwrightFunctionsHost: CellwrightFunctionsHost | undefined;
-}
 
 /** Longest reason put into an #N/A message (the whole message stays well under 300 characters). */
 const MAX_REASON = 200;

@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 /**
- * Benchmark of the worksheet functions (issue 5): `npm run bench`.
+ * Benchmark of the worksheet functions: `npm run bench`.
  *
  * Loads the production bundle dist/functions.js exactly like tests/bundle/harness.ts does (node:vm,
  * nothing but a CustomFunctions global) and, for each case, times the call through the worksheet

@@ -7,14 +7,15 @@
 // Sources, and nothing typed by hand about a function's behaviour:
 //   dist/functions.json           the functions, their descriptions, parameters (order, name,
 //                                 description, optional) and help URLs, as Excel reads them;
-//   functions/declarations/*.ts   the @returns line of each declaration (functions.json has none);
-//   functions/adapter.ts registry each argument's unit, default and accepted values;
+//   functions/families/*.ts       the specs (through the adapter's registry): each argument's
+//                                 unit, default and accepted values, and the result (which
+//                                 functions.json does not carry);
 //   docs/examples.json            the order, one example's arguments per function, see-also links;
 //   dist/functions.js             the example values and the errors, computed by the bundle
 //                                 (loaded as Excel's runtime loads it) while the reference is made.
 // --check compares the generated text with the committed files (and the README's table) and
 // exits 1 when they differ.
-import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { ensureBuilt, loadBundle, ROOT } from './lib/bundle.mjs';
@@ -75,26 +76,6 @@ async function callExcelStyle(bundle, id, args) {
 /* ---------------------------------------------------------------------------------------- */
 /* The model                                                                                 */
 /* ---------------------------------------------------------------------------------------- */
-
-/** @returns lines of the declarations, by function id. */
-function returnsById() {
-  const dir = resolve(ROOT, 'functions/declarations');
-  const out = new Map();
-  for (const f of readdirSync(dir).filter((x) => x.endsWith('.ts')).sort()) {
-    const text = readFileSync(resolve(dir, f), 'utf8');
-    for (const m of text.matchAll(/\/\*\*([\s\S]*?)\*\//g)) {
-      const body = m[1].split('\n').map((l) => l.replace(/^\s*\*\s?/, ''));
-      const id = body.map((l) => /^@customfunction\s+(\S+)/.exec(l)).find(Boolean)?.[1];
-      if (!id) continue;
-      const i = body.findIndex((l) => l.startsWith('@returns'));
-      if (i < 0) continue;
-      const lines = [body[i].replace(/^@returns\s*/, '')];
-      for (let j = i + 1; j < body.length && body[j].trim() && !body[j].startsWith('@'); j++) lines.push(body[j].trim());
-      out.set(id.toUpperCase(), lines.join(' ').trim());
-    }
-  }
-  return out;
-}
 
 const KIND_UNIT = {
   couple: 'couple key',
@@ -179,7 +160,6 @@ export async function buildModel() {
   const bundle = loadBundle();
   const registry = await loadRegistry();
   const examples = JSON.parse(readFileSync(resolve(ROOT, 'docs/examples.json'), 'utf8'));
-  const returns = returnsById();
   const metaById = new Map(bundle.metadata.functions.map((f) => [f.id, f]));
   const problems = [];
 
@@ -223,7 +203,7 @@ export async function buildModel() {
         helpUrl: meta.helpUrl,
         syntax: `=${NAMESPACE}.${id}(${params.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ')})`,
         params,
-        returns: returns.get(id) ?? '',
+        returns: spec.result ?? '',
         rowResult: spec.rowResult,
         example: { formula: formulaOf(id, ex.args), value, says: ex.says ?? '' },
         errors: await errorsOf(bundle, id, ex.args, spec.args),

@@ -5,7 +5,7 @@
  * (tests/taskpane/*.test.ts) and driven by the page (taskpane.ts).
  *
  * After every action that changes the stored table the model
- *  1. writes it (functions/workbookStore.ts: only if the workbook still holds what this pane last
+ *  1. writes it (workbook/store.ts: only if the workbook still holds what this pane last
  *     read; otherwise nothing is written and the user is told what changed elsewhere),
  *  2. hands the stored value to the worksheet functions (globalThis.cellwrightFunctionsHost),
  *  3. recalculates: application.calculate(Excel.CalculationType.full).
@@ -14,8 +14,8 @@ import { type TableChange, type WorkbookCopy, ChangeError, applyChange, pinnedCo
 import { type RowDifference, describeDifference, diffTables } from '../src/store/diff';
 import { type TableRecords, type VersionedRecords, cleanRecord, matchKey, rowsOf, sameRecord } from '../src/store/rows';
 import { builtinChecksum } from '../src/store/stored';
-import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../functions/workbookHost';
-import { type StoredState, type WriteOutcome, computedWithOf, readStoredValue, interpret, recalculateAll, removeTable, sameStoredValue, writeCopy } from '../functions/workbookStore';
+import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../workbook/channel';
+import { type StoredState, type WriteOutcome, computedWithOf, readStoredValue, interpret, recalculateAll, removeTable, sameStoredValue, writeCopy } from '../workbook/store';
 
 export interface ModelDeps {
   readonly builtin: VersionedRecords;

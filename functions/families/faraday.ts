@@ -19,62 +19,123 @@ const species: ArgSpec = { name: 'species', kind: 'species', domain: domains.pos
 /** Current efficiency, a fraction in (0, 1], default 1. */
 const efficiency: ArgSpec = optNum('efficiency', 1, domains.efficiency);
 
-export const MOLARMASS = worksheet({ id: 'MOLARMASS', args: [{ name: 'formula', kind: 'text' }], compute: molarMass });
+export const MOLARMASS = worksheet({
+  id: 'MOLARMASS',
+  description: 'Molar mass of a formula in g/mol from IUPAC standard atomic weights; parentheses, square brackets and hydrate dots (·, * or .) understood.',
+  args: [
+    { name: 'formula', kind: 'text', help: 'Chemical formula, e.g. "NiSO4·6H2O" or "K3[Fe(CN)6]" (element symbols are case-sensitive).' },
+  ],
+  result: 'Molar mass in g/mol.',
+  helpAnchor: 'molarmass',
+  compute: molarMass,
+});
 
-export const ECEQUIV = worksheet({ id: 'ECEQUIV', args: [species, electrons], compute: ecEquiv });
+export const ECEQUIV = worksheet({
+  id: 'ECEQUIV',
+  description: 'Electrochemical equivalent M·3600/(nF), in g/(A·h).',
+  args: [
+    { ...species, help: 'Formula such as "Ni", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+  ],
+  result: 'g/(A·h).',
+  helpAnchor: 'ecequiv',
+  compute: ecEquiv,
+});
 
 export const DEPOSITMASS = worksheet({
   id: 'DEPOSITMASS',
-  args: [num('current_A', domains.nonNegative, 'A'), num('time_h', domains.nonNegative, 'h'), species, electrons, efficiency],
+  description: 'Mass deposited or dissolved by a current (Faraday\'s law), in g.',
+  args: [
+    { ...num('current_A', domains.nonNegative, 'A'), help: 'Current, in A.' },
+    { ...num('time_h', domains.nonNegative, 'h'), help: 'Time, in h.' },
+    { ...species, help: 'Formula such as "Cu", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+    { ...efficiency, help: 'Current efficiency as a fraction, 0 to 1 (default 1).' },
+  ],
+  result: 'Mass in g.',
+  helpAnchor: 'depositmass',
   compute: depositMass,
 });
 
 export const DEPOSITTIME = worksheet({
   id: 'DEPOSITTIME',
-  args: [num('mass_g', domains.nonNegative, 'g'), num('current_A', domains.positive, 'A'), species, electrons, efficiency],
+  description: 'Time to deposit a mass at a current (Faraday\'s law), in h.',
+  args: [
+    { ...num('mass_g', domains.nonNegative, 'g'), help: 'Mass wanted, in g.' },
+    { ...num('current_A', domains.positive, 'A'), help: 'Current, in A.' },
+    { ...species, help: 'Formula such as "Cu", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+    { ...efficiency, help: 'Current efficiency as a fraction, 0 to 1 (default 1).' },
+  ],
+  result: 'Time in h.',
+  helpAnchor: 'deposittime',
   compute: depositTime,
 });
 
 export const PLATETHICKNESS = worksheet({
   id: 'PLATETHICKNESS',
+  description: 'Thickness of a uniform deposit, in µm, from current density (A/dm²), time (min) and deposit density (g/cm³).',
   args: [
-    num('current_density_A_dm2', domains.nonNegative, 'A/dm²'),
-    num('time_min', domains.nonNegative, 'min'),
-    species,
-    electrons,
-    num('density_g_cm3', domains.positive, 'g/cm³'),
-    efficiency,
+    { ...num('current_density_A_dm2', domains.nonNegative, 'A/dm²'), help: 'Current density, in A/dm².' },
+    { ...num('time_min', domains.nonNegative, 'min'), help: 'Plating time, in min.' },
+    { ...species, help: 'Formula such as "Ni", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+    { ...num('density_g_cm3', domains.positive, 'g/cm³'), help: 'Density of the deposit, in g/cm³.' },
+    { ...efficiency, help: 'Cathode current efficiency as a fraction, 0 to 1 (default 1).' },
   ],
+  result: 'Thickness in µm.',
+  helpAnchor: 'platethickness',
   compute: plateThickness,
 });
 
 export const PLATETIME = worksheet({
   id: 'PLATETIME',
+  description: 'Time to plate a thickness, in min, at a current density (A/dm²) and deposit density (g/cm³).',
   args: [
-    num('thickness_um', domains.nonNegative, 'µm'),
-    num('current_density_A_dm2', domains.positive, 'A/dm²'),
-    species,
-    electrons,
-    num('density_g_cm3', domains.positive, 'g/cm³'),
-    efficiency,
+    { ...num('thickness_um', domains.nonNegative, 'µm'), help: 'Thickness wanted, in µm.' },
+    { ...num('current_density_A_dm2', domains.positive, 'A/dm²'), help: 'Current density, in A/dm².' },
+    { ...species, help: 'Formula such as "Ni", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+    { ...num('density_g_cm3', domains.positive, 'g/cm³'), help: 'Density of the deposit, in g/cm³.' },
+    { ...efficiency, help: 'Cathode current efficiency as a fraction, 0 to 1 (default 1).' },
   ],
+  result: 'Time in min.',
+  helpAnchor: 'platetime',
   compute: plateTime,
 });
 
 export const CURRENTEFFICIENCY = worksheet({
   id: 'CURRENTEFFICIENCY',
-  args: [num('mass_g', domains.nonNegative, 'g'), num('current_A', domains.positive, 'A'), num('time_h', domains.positive, 'h'), species, electrons],
+  description: 'Current efficiency: mass obtained over the Faraday\'s-law mass for the charge passed, as a fraction (above 1 means a measurement to question).',
+  args: [
+    { ...num('mass_g', domains.nonNegative, 'g'), help: 'Mass obtained, in g.' },
+    { ...num('current_A', domains.positive, 'A'), help: 'Current, in A.' },
+    { ...num('time_h', domains.positive, 'h'), help: 'Time, in h.' },
+    { ...species, help: 'Formula such as "Cu", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+  ],
+  result: 'Efficiency as a fraction.',
+  helpAnchor: 'currentefficiency',
   compute: currentEfficiency,
 });
 
 export const SPECIFICENERGY = worksheet({
   id: 'SPECIFICENERGY',
-  args: [num('cell_voltage_V', domains.positive, 'V'), species, electrons, efficiency],
+  description: 'Specific electrical energy of an electrolysis, U·nF/(efficiency·M), in kWh per kg of product.',
+  args: [
+    { ...num('cell_voltage_V', domains.positive, 'V'), help: 'Cell voltage, in V.' },
+    { ...species, help: 'Product formula such as "Cu", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
+    { ...efficiency, help: 'Current efficiency as a fraction, 0 to 1 (default 1).' },
+  ],
+  result: 'kWh/kg.',
+  helpAnchor: 'specificenergy',
   compute: specificEnergy,
 });
 
 export const GASVOLUME = worksheet({
   id: 'GASVOLUME',
+  description: 'Volume of ideal gas evolved by a current, in L, at a temperature (°C) and pressure (bar).',
   args: [
     num('current_A', domains.nonNegative, 'A'),
     num('time_h', domains.nonNegative, 'h'),
@@ -84,5 +145,7 @@ export const GASVOLUME = worksheet({
     { name: 'pressure_bar', kind: 'number', optional: true, default: STANDARD_PRESSURE_BAR, domain: domains.positive, unit: 'bar' },
     { name: 'saturated', kind: 'boolean', optional: true, default: false, unit: '' },
   ],
+  result: 'Volume in L.',
+  helpAnchor: 'gasvolume',
   compute: gasVolume,
 });

@@ -22,7 +22,16 @@ export const BUTLERVOLMER = worksheet({
 
 export const OVERPOTENTIAL = worksheet({
   id: 'OVERPOTENTIAL',
-  args: [num('i', domains.any, "i0's unit"), i0, alphaA, alphaC, temperatureC],
+  description: 'Overpotential that gives a current density by Butler–Volmer (its inverse, solved to 1e-9 V), in V.',
+  args: [
+    { ...num('i', domains.any, "i0's unit"), help: 'Current density, in i0\'s units (anodic positive, cathodic negative).' },
+    { ...i0, help: 'Exchange current density (> 0).' },
+    { ...alphaA, help: 'Apparent anodic transfer coefficient (> 0, n included).' },
+    { ...alphaC, help: 'Apparent cathodic transfer coefficient (> 0; default 1 − alpha_a).' },
+    temperatureC,
+  ],
+  result: 'Overpotential in V.',
+  helpAnchor: 'overpotential',
   compute: overpotential,
 });
 

@@ -12,21 +12,43 @@ const ionSize: ArgSpec = optNum('ion_size_A', null, domains.positive, 'Å');
 
 export const IONICSTRENGTH = worksheet({
   id: 'IONICSTRENGTH',
+  description: 'Ionic strength ½·Σ mᵢ·zᵢ², in mol/kg.',
   args: [
-    { name: 'molalities', kind: 'numberList', domain: domains.nonNegative, unit: 'mol/kg' },
-    { name: 'charges', kind: 'numberList', domain: domains.integer, unit: '' },
+    { name: 'molalities', kind: 'numberList', domain: domains.nonNegative, unit: 'mol/kg', help: 'Molality of each ion, in mol/kg (a range).' },
+    { name: 'charges', kind: 'numberList', domain: domains.integer, unit: '', help: 'Charge of each ion (a range of the same size; whole numbers).' },
   ],
+  result: 'Ionic strength in mol/kg.',
+  helpAnchor: 'ionicstrength',
   compute: ionicStrength,
 });
 
 export const ACTIVITYCOEF = worksheet({
   id: 'ACTIVITYCOEF',
-  args: [charge('charge'), strength, model, temperatureC, ionSize],
+  description: 'Single-ion activity coefficient by "DHLL" (limiting law), "EDH" (extended Debye–Hückel, needs the ion size in Å) or "DAVIES"; A and B follow temperature (0 to 100 °C).',
+  args: [
+    { ...charge('charge'), help: 'Charge number of the ion (a whole number).' },
+    { ...strength, help: 'Ionic strength, in mol/kg.' },
+    { ...model, help: '"DHLL", "EDH" or "DAVIES" (default "DAVIES").' },
+    temperatureC,
+    { ...ionSize, help: 'Ion size parameter, in Å (required by "EDH", ignored otherwise).' },
+  ],
+  result: 'Activity coefficient (dimensionless).',
+  helpAnchor: 'activitycoef',
   compute: activityCoef,
 });
 
 export const MEANACTIVITYCOEF = worksheet({
   id: 'MEANACTIVITYCOEF',
-  args: [charge('z_cation', domains.nonZeroInteger), charge('z_anion', domains.nonZeroInteger), strength, model, temperatureC, ionSize],
+  description: 'Mean ionic activity coefficient of a salt by "DHLL", "EDH" (needs the ion size in Å) or "DAVIES"; A and B follow temperature (0 to 100 °C).',
+  args: [
+    { ...charge('z_cation', domains.nonZeroInteger), help: 'Charge of the cation (a whole number; only its magnitude counts).' },
+    { ...charge('z_anion', domains.nonZeroInteger), help: 'Charge of the anion (a whole number; only its magnitude counts).' },
+    { ...strength, help: 'Ionic strength, in mol/kg.' },
+    { ...model, help: '"DHLL", "EDH" or "DAVIES" (default "DAVIES").' },
+    temperatureC,
+    { ...ionSize, help: 'Mean ion size parameter, in Å (required by "EDH", ignored otherwise).' },
+  ],
+  result: 'Mean activity coefficient (dimensionless).',
+  helpAnchor: 'meanactivitycoef',
   compute: meanActivityCoef,
 });

@@ -38,4 +38,4 @@ export interface LoadedBundle {
 }
 
 export declare function ensureBuilt(options?: { quiet?: boolean }): string;
-export declare function loadBundle(extraGlobals?: Record<string, unknown>, distDir?: string): LoadedBundle;
+export declare function loadBundle(extraGlobals?: Record<string, unknown>, distDir?: string, options?: { isolated?: boolean }): LoadedBundle;

@@ -1,6 +1,7 @@
-// A small formula evaluator for the demo workbook and the worked examples of the reference.
+// A small formula evaluator for the demo workbook (scripts/lib/workbook.mjs checks each stored
+// value against it) and the demo test.
 //
-// It understands only the forms the demo and the examples use, and says so when it meets
+// It understands only the forms the demo uses, and says so when it meets
 // anything else (an error, never a guess):
 //   numbers, "text" (with "" for a quote), TRUE/FALSE, array constants {1,2;3,4},
 //   cell references (A1, $A$1) and ranges (A1:B3) on the same sheet,

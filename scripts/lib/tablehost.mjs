@@ -5,7 +5,7 @@
 import { loadBundle } from './bundle.mjs';
 import { TABLE_SETTING_KEY } from './webextension.mjs';
 
-/** An Office + Excel pair that answers the settings read of functions/workbookStore.ts with `stored`. */
+/** An Office + Excel pair that answers the settings read of workbook/store.ts with `stored`. */
 function hostFor(stored) {
   const Office = {
     onReady: async () => ({ host: 'Excel', platform: 'PC' }),

@@ -22,7 +22,7 @@ const REL_WEBEXTENSION = 'http://schemas.microsoft.com/office/2011/relationships
 const CT_WEBEXTENSION = 'application/vnd.ms-office.webextension+xml';
 const CT_TASKPANES = 'application/vnd.ms-office.webextensiontaskpanes+xml';
 
-/** The add-in's settings key of the stored potential table (functions/workbookStore.ts). */
+/** The add-in's settings key of the stored potential table (workbook/store.ts). */
 export const TABLE_SETTING_KEY = 'cellwright.potentialTable';
 
 const esc = (s) => String(s).replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');

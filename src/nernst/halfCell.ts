@@ -1,10 +1,9 @@
-import { type HalfReactionTerm, lnReactionQuotient, speciesState } from '../chem/halfReaction';
+import { speciesState } from '../chem/halfReaction';
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, LN10, kelvin } from '../constants';
 import { DomainError } from '../errors';
 import { e0AtTemperature } from '../cells/e0AtTemperature';
 import type { CoupleRow } from '../table/types';
 import { speciesPKw } from '../species/speciesPKw';
-import type { HalfReaction } from '../chem/halfReaction';
 
 /**
  * Reduction potential of a half-cell vs SHE at given activities, pH and temperature, from the
@@ -39,43 +38,41 @@ export function halfCell(
   const aRed = redActivity ?? 1;
   if (!(aOx > 0) || !(aRed > 0)) throw new DomainError('activities must be > 0');
   const plan = planOf(row);
-  const e0 = e0AtTemperature(plan, temperatureC);
+  const e0 = e0AtTemperature(row, temperatureC);
   let lnQ = 0;
   if (pH !== null && pH !== undefined) {
     if (!Number.isFinite(pH)) throw new DomainError('pH must be a finite number');
-    // ln a_H+ = −pH·ln 10; ln a_OH- = (pH − pKw)·ln 10. Within ±300 decades 10^x is a normal,
-    // finite number, so these equal the logarithms of the activities the general walk forms.
+    // ln a_H+ = −pH·ln 10 and ln a_OH- = (pH − pKw)·ln 10 while the activity is a normal double
+    // (within ±300 decades); beyond that the activity itself is formed and its logarithm taken,
+    // so that an activity that underflows to 0 or overflows is refused, not extrapolated.
     if (plan.usesH) {
-      if (!(pH >= -300 && pH <= 300)) return halfCellByTerms(row, aOx, aRed, pH, temperatureC, e0);
-      lnQ -= plan.nuH * pH * LN10;
+      if (pH >= -300 && pH <= 300) lnQ -= plan.nuH * pH * LN10;
+      else lnQ += plan.nuH * lnOfActivity(Math.pow(10, -pH), 'H+');
     }
     if (plan.usesOH) {
       const d = pH - pKwAt(temperatureC);
-      if (!(d >= -300 && d <= 300)) return halfCellByTerms(row, aOx, aRed, pH, temperatureC, e0);
-      lnQ += plan.nuOH * d * LN10;
+      if (d >= -300 && d <= 300) lnQ += plan.nuOH * d * LN10;
+      else lnQ += plan.nuOH * lnOfActivity(Math.exp(d * LN10), 'OH-');
     }
   }
-  if (plan.usesOx) {
-    if (aOx === Infinity) return halfCellByTerms(row, aOx, aRed, pH, temperatureC, e0);
-    lnQ -= plan.nuOx * Math.log(aOx);
-  }
-  if (plan.usesRed) {
-    if (aRed === Infinity) return halfCellByTerms(row, aOx, aRed, pH, temperatureC, e0);
-    lnQ += plan.nuRed * Math.log(aRed);
-  }
+  if (plan.usesOx) lnQ -= plan.nuOx * lnOfActivity(aOx, 'the oxidized-side species');
+  if (plan.usesRed) lnQ += plan.nuRed * lnOfActivity(aRed, 'the reduced-side species');
   return e0 - ((GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC)) / (plan.n * FARADAY_C_PER_MOL)) * lnQ;
 }
 
+/** ln a of an activity that must be a finite number > 0. */
+function lnOfActivity(a: number, what: string): number {
+  if (!(a > 0) || a === Infinity) throw new DomainError(`the activity of ${what} must be a finite number > 0; got ${a}`);
+  return Math.log(a);
+}
+
 /**
- * A couple row compiled for halfCell: what E°(T) needs, n, and for ln Q the net exponent of each
- * activity halfCell takes (ν summed over the terms that use it, + on the reduced side, − on the
- * oxidized side written as the ox exponent), with whether any term uses it at all.
+ * A couple row compiled for halfCell from the terms of its half-reaction: n, and for ln Q the net
+ * exponent of each activity halfCell takes (ν summed over the terms that use it, + on the reduced
+ * side, − on the oxidized side written as the ox exponent), with whether any term uses it at all.
+ * ln Q = Σ ν·ln a over the terms is then a few products per cell instead of a walk over the terms.
  */
 interface HalfCellPlan {
-  readonly key: string;
-  readonly e0: number;
-  readonly dEdT_mV_K: number | undefined;
-  readonly parsed: HalfReaction;
   readonly n: number;
   /** Σ ν of the dissolved and gaseous species on the oxidized side (each enters ln Q as −ν·ln a_ox). */
   readonly nuOx: number;
@@ -140,7 +137,7 @@ function compilePlan(row: CoupleRow): HalfCellPlan {
         break;
     }
   }
-  return { key: row.key, e0: row.e0, dEdT_mV_K: row.dEdT_mV_K, parsed: row.parsed, n: row.n, nuOx, nuRed, nuH, nuOH, usesOx, usesRed, usesH, usesOH };
+  return { n: row.n, nuOx, nuRed, nuH, nuOH, usesOx, usesRed, usesH, usesOH };
 }
 
 /** pKw at the temperature last asked for (halfCell over a range asks at one temperature). */
@@ -153,33 +150,4 @@ function pKwAt(temperatureC: number): number {
     lastKwTemperatureC = temperatureC;
   }
   return lastPKw;
-}
-
-/**
- * halfCell the general way, term by term through lnReactionQuotient: for the inputs the plan's
- * arithmetic does not cover exactly (an activity of H+ or OH- beyond 10^±300, an infinite
- * activity), so that these give the same answer or the same error as always.
- */
-function halfCellByTerms(row: CoupleRow, aOx: number, aRed: number, pH: number | null, temperatureC: number, e0: number): number {
-  let aH = 1;
-  let aOH = pH === null || pH === undefined ? 1 : NaN; // NaN: from pH and Kw(T), when an OH- term needs it
-  if (pH !== null && pH !== undefined) aH = Math.pow(10, -pH);
-  const activity = (t: HalfReactionTerm): number => {
-    switch (speciesState(t.species, t.phase)) {
-      case 'H+':
-        return aH;
-      case 'OH-':
-        if (Number.isNaN(aOH)) aOH = Math.exp(((pH as number) - pKwAt(temperatureC)) * LN10);
-        return aOH;
-      case 'water':
-      case 'solid':
-      case 'liquid':
-        return 1;
-      case 'gas':
-      case 'aqueous':
-        return t.side === 'ox' ? aOx : aRed;
-    }
-  };
-  const lnQ = lnReactionQuotient(row.parsed, activity);
-  return e0 - ((GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC)) / (row.n * FARADAY_C_PER_MOL)) * lnQ;
 }

@@ -25,7 +25,7 @@ export function canonicalJson(value: unknown): string {
       return Object.is(value, -0) ? '0' : JSON.stringify(value);
     case 'object': {
       if (Array.isArray(value)) return `[${value.map((v) => canonicalJson(v === undefined ? null : v)).join(',')}]`;
-      const proto = Object.getPrototypeOf(value);
+      const proto: unknown = Object.getPrototypeOf(value);
       if (proto !== Object.prototype && proto !== null) throw new TypeError('canonical JSON holds only plain objects');
       const obj = value as Record<string, unknown>;
       const keys = Object.keys(obj)

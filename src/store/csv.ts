@@ -277,7 +277,7 @@ export function importCsv(text: string): CsvImport {
         const candidate = { key: get('key'), halfReaction: get('half_reaction'), e0: potential as number, dEdT_mV_K: dEdT, source: get('source'), note };
         const v = validateCoupleRecord(candidate);
         if (v.row === undefined) problems.push(...v.problems);
-        else record = cleanCouple(candidate as CoupleRecord);
+        else record = cleanCouple(candidate);
       }
     } else {
       if (get('half_reaction') !== '') problems.push('half_reaction is for couples; leave it empty for an electrode');
@@ -286,7 +286,7 @@ export function importCsv(text: string): CsvImport {
         const candidate = { key: get('key'), aliases, potential: potential as number, dEdT_mV_K: dEdT, source: get('source'), note };
         const v = validateElectrodeRecord(candidate);
         if (v.row === undefined) problems.push(...v.problems);
-        else record = cleanElectrode(candidate as ElectrodeRecord);
+        else record = cleanElectrode(candidate);
       }
     }
     if (problems.length > 0 || record === undefined) {

@@ -54,16 +54,22 @@ export function diffTables(from: TableRecords, to: TableRecords): RowDifference[
   return [...diffKind('couple', rowsOf(from, 'couple'), rowsOf(to, 'couple')), ...diffKind('electrode', rowsOf(from, 'electrode'), rowsOf(to, 'electrode'))];
 }
 
+/** A numeric field of a row as text, "undefined" when the row does not have it. */
+function fieldText(rec: AnyRecord | undefined, field: string): string {
+  const v: unknown = rec === undefined ? undefined : Object.entries(rec).find(([k]) => k === field)?.[1];
+  return typeof v === 'number' || v === undefined ? String(v) : JSON.stringify(v);
+}
+
 /** A difference as one line of plain text, e.g. 'Cu2+/Cu: E° 0.3419 → 0.34 V' or 'Zn2+/Zn: removed'. */
 export function describeDifference(d: RowDifference): string {
   const what = d.rowKind === 'couple' ? 'couple' : 'electrode';
   if (d.status === 'added') return `${what} ${d.key}: added`;
   if (d.status === 'removed') return `${what} ${d.key}: removed`;
   const parts = d.fields.map((f) => {
-    const b = (d.before as unknown as Record<string, unknown>)[f];
-    const a = (d.after as unknown as Record<string, unknown>)[f];
-    if (f === 'e0' || f === 'potential') return `${f === 'e0' ? 'E°' : 'potential'} ${String(b)} → ${String(a)} V`;
-    if (f === 'dEdT_mV_K') return `dE/dT ${b === undefined ? 'none' : String(b)} → ${a === undefined ? 'none' : String(a)} mV/K`;
+    const b = fieldText(d.before, f);
+    const a = fieldText(d.after, f);
+    if (f === 'e0' || f === 'potential') return `${f === 'e0' ? 'E°' : 'potential'} ${b} → ${a} V`;
+    if (f === 'dEdT_mV_K') return `dE/dT ${b === 'undefined' ? 'none' : b} → ${a === 'undefined' ? 'none' : a} mV/K`;
     if (f === 'halfReaction') return 'half-reaction';
     if (f === 'aliases') return 'other names';
     return f;

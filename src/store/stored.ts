@@ -8,7 +8,7 @@
  *   schema     2
  *   basedOn    version of the built-in table the copy was pinned to or last brought up to
  *   revision   write counter, 1 for the first write, +1 per write (shown to people; conflicts are
- *              detected on the whole text, see functions/workbookStore.ts)
+ *              detected on the whole text, see workbook/store.ts)
  *   changedAt  time of the last write, ISO 8601 UTC
  *   checksum   "sha256:" + SHA-256 of the canonical JSON of { basedOn, couples, electrodes, own, removed }
  *              (own and removed sorted); revision and time are not covered, so the same rows always
@@ -100,7 +100,7 @@ function schema1Checksum(basedOn: string, couples: unknown, electrodes: unknown)
 
 /**
  * The stored text of a copy (schema 2). The copy's revision and changedAt are written as given: the
- * store sets them (functions/workbookStore.ts). Throws ChangeError when the text would exceed
+ * store sets them (workbook/store.ts). Throws ChangeError when the text would exceed
  * MAX_STORED_CHARS or the copy is not a usable table.
  *
  * Syntax: writeStoredText(copy)
@@ -218,7 +218,7 @@ function checkKeyLists(name: string, x: unknown, problems: string[]): KeyLists {
     problems.push(`"${name}" is not { couples: [keys], electrodes: [keys] } with keys of at most ${MAX_KEY_CHARS} characters`);
     return { couples: [], electrodes: [] };
   }
-  return { couples: x.couples as string[], electrodes: x.electrodes as string[] };
+  return { couples: x.couples, electrodes: x.electrodes };
 }
 
 /** The highest revision read: the next write (revision + 1) must still be an exact whole number. */

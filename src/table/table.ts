@@ -11,8 +11,9 @@ import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
 import { CellwrightError } from '../errors';
 import { MAX_FORMULA_CHARS, MAX_KEY_CHARS, MAX_NOTE_CHARS, MAX_SOURCE_CHARS } from '../textLimits';
 import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
-import type { CoupleRecord, ElectrodeRecord } from './records';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from './types';
+import { quote } from '../text/quote';
+import { shorten } from '../text/shorten';
 
 /** Plausible range of E° in V vs SHE (the aqueous electrochemical series spans about −3.1…+3.1 V). */
 export const E0_RANGE_V = { min: -4, max: 4 } as const;
@@ -46,19 +47,8 @@ function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
 }
 
-/** Longest text echoed in a message, in characters (longer text is cut and ends in "…"). */
-const ECHO_MAX_CHARS = 40;
 /** Longest message passed on from the half-reaction or species reader (it may quote the text read). */
 const READER_MESSAGE_MAX_CHARS = 160;
-
-/** Cuts text to `max` characters (not inside a surrogate pair), marking the cut with "…". */
-function cut(text: string, max: number): string {
-  if (text.length <= max) return text;
-  let end = max;
-  const last = text.charCodeAt(end - 1);
-  if (last >= 0xd800 && last <= 0xdbff) end--;
-  return `${text.slice(0, end)}…`;
-}
 
 /**
  * A value as a message shows it, always short: a number as a number, text quoted and cut to 40
@@ -67,7 +57,7 @@ function cut(text: string, max: number): string {
 function echo(x: unknown): string {
   if (x === undefined || x === null) return 'nothing';
   if (typeof x === 'number') return String(x);
-  if (typeof x === 'string') return JSON.stringify(cut(x, ECHO_MAX_CHARS));
+  if (typeof x === 'string') return quote(x);
   if (typeof x === 'boolean') return String(x);
   if (Array.isArray(x)) return 'a list';
   if (typeof x === 'object') return 'an object';
@@ -134,7 +124,7 @@ export function validateCoupleRecord(record: unknown): Validated<CoupleRow> {
     try {
       parsed = parseHalfReaction(text);
     } catch (e) {
-      problems.push(cut(e instanceof CellwrightError ? e.message : `the half-reaction cannot be read: ${String(e)}`, READER_MESSAGE_MAX_CHARS));
+      problems.push(shorten(e instanceof CellwrightError ? e.message : `the half-reaction cannot be read: ${String(e)}`, READER_MESSAGE_MAX_CHARS));
     }
   }
   if (key !== undefined) {
@@ -179,7 +169,7 @@ function keySpecies(text: string, which: string, key: string, problems: string[]
     }
     return s.key;
   } catch (e) {
-    problems.push(cut(`the key's ${which} ${echo(text)} is not a species: ${e instanceof Error ? e.message : String(e)}`, READER_MESSAGE_MAX_CHARS));
+    problems.push(shorten(`the key's ${which} ${echo(text)} is not a species: ${e instanceof Error ? e.message : String(e)}`, READER_MESSAGE_MAX_CHARS));
     return undefined;
   }
 }

@@ -26,7 +26,7 @@
     try {
       var f = JSON.parse(localStorage.getItem(FILE_KEY) || 'null');
       if (f && typeof f === 'object') return f;
-    } catch (e) {
+    } catch {
       /* a fresh file */
     }
     return { settings: {}, calculations: [], sheets: {}, runs: 0 };

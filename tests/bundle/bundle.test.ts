@@ -1,9 +1,10 @@
 /**
- * The production bundle, loaded as Excel's runtime loads it (node:vm, only a CustomFunctions
- * global): registration, and the adapter's rules on the thermodynamics and Nernst families.
+ * The production bundle, loaded as Excel's runtime loads it (a CustomFunctions global): registration,
+ * self-containment (evaluated alone in node:vm), and the adapter's rules on the thermodynamics and
+ * Nernst families.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { type LoadedBundle, isError, loadBundle, one } from './harness';
+import { DIST, type LoadedBundle, isError, loadBundle, one } from './harness';
 
 let b: LoadedBundle;
 beforeAll(() => {
@@ -23,9 +24,14 @@ describe('registration', () => {
       expect(f.helpUrl, f.id).toBe(`https://localhost:3000/docs/functions.html#${f.id.toLowerCase()}`);
     }
   });
-  it('needs nothing but CustomFunctions: no Office, Excel, window or document', () => {
-    expect(b.sandbox.Office).toBeUndefined();
-    expect(b.sandbox.window).toBeUndefined();
+  it('needs nothing but CustomFunctions: evaluated alone in a node:vm context it registers every function and answers', () => {
+    const alone = loadBundle({}, DIST, { isolated: true });
+    expect(alone.sandbox.Office).toBeUndefined();
+    expect(alone.sandbox.window).toBeUndefined();
+    expect([...alone.registered.keys()].sort()).toEqual([...b.registered.keys()].sort());
+    const args = [[[0.3419]], [[2]], [[0.01], [1], [100]], null] as const;
+    expect(alone.call('NERNST', ...args)).toEqual(b.call('NERNST', ...args));
+    expect(one(alone.call('STDPOTENTIAL', 'Cu2+/Cu', null))).toBe(one(b.call('STDPOTENTIAL', 'Cu2+/Cu', null)));
   });
 });
 

@@ -1,10 +1,11 @@
 /**
  * The test suite's view of the production bundle. Loading is done by the one loader,
- * scripts/lib/bundle.mjs (also used by the demo and the reference generator): dist/functions.js
- * evaluated in node:vm with nothing but a CustomFunctions global (no Office, Excel, window,
- * document), calls by id with every declared parameter passed (null for omitted ones) and an
- * invocation object appended last.
+ * scripts/lib/bundle.mjs (also used by the demo, the reference generator and the benchmark):
+ * dist/functions.js evaluated with a CustomFunctions global (in this process's context, or alone in
+ * node:vm when a test gives extra globals or asks for isolation), calls by id with every declared
+ * parameter passed (null for omitted ones) and an invocation object appended last.
  */
+import { beforeAll } from 'vitest';
 import { DIST, ErrorCode, FakeError, type FunctionMetadata, type LoadedBundle, loadBundle } from '../../scripts/lib/bundle.mjs';
 
 export { DIST, ErrorCode, FakeError, loadBundle };
@@ -19,4 +20,20 @@ export function one(result: unknown): unknown {
 /** True when v is an Excel error value, optionally of a given code (e.g. '#N/A'). */
 export function isError(v: unknown, code?: string): v is FakeError {
   return v instanceof FakeError && (code === undefined || v.code === code);
+}
+
+/**
+ * The bundle for one test file, loaded before its tests: `bundle()` returns it, `run(id, …)` calls a
+ * function and awaits the result (table look-ups may answer with a promise while the table loads).
+ */
+export function bundleUnderTest(): { bundle: () => LoadedBundle; run: (id: string, ...args: unknown[]) => Promise<unknown> } {
+  let loaded: LoadedBundle | null = null;
+  beforeAll(() => {
+    loaded = loadBundle();
+  });
+  const bundle = (): LoadedBundle => {
+    if (loaded === null) throw new Error('the bundle is loaded before the tests run');
+    return loaded;
+  };
+  return { bundle, run: async (id, ...args) => await bundle().call(id, ...args) };
 }

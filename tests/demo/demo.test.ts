@@ -191,7 +191,7 @@ describe('demo/cellwright-demo.xlsx', () => {
     const errors: string[] = [];
     for (const ws of wb.worksheets) {
       for (const f of formulaCells(ws)) {
-        const cells = Array.isArray(f.cached) ? (f.cached as Scalar[][]).flat() : [f.cached as Scalar];
+        const cells = Array.isArray(f.cached) ? (f.cached as Scalar[][]).flat() : [f.cached];
         if (cells.some((v) => isErrorValue(v)) && !expected.has(`${f.sheet}!${f.addr}`)) errors.push(`${f.sheet}!${f.addr} =${f.formula}`);
       }
     }

@@ -87,3 +87,14 @@ describe('halfCell: properties and errors', () => {
     expect(() => halfCell(row('Cu2+/Cu'), 1, 1, 3, 101)).toThrow(DomainError);
   });
 });
+
+describe('halfCell: activities beyond the range of doubles', () => {
+  it('refuses an H+, OH- or species activity that underflows to 0 or overflows, and keeps a subnormal one', () => {
+    // 10^−400 is 0 in doubles and 10^400 is +∞: no finite activity, so no potential.
+    expect(() => halfCell(row('H+/H2'), null, null, 400, 25)).toThrow(DomainError);
+    expect(() => halfCell(row('H+/H2'), null, null, -400, 25)).toThrow(DomainError);
+    expect(() => halfCell(row('Cu2+/Cu'), Number.POSITIVE_INFINITY, null, null, 25)).toThrow(DomainError);
+    // 10^−310 is a subnormal double (5 significant digits left): E = −0.05916·310 V to those digits.
+    expect(halfCell(row('H+/H2'), null, null, 310, 25)).toBeCloseTo(-S * 310, 4);
+  });
+});

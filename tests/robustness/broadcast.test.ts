@@ -1,5 +1,5 @@
 /**
- * Issue 6 (and the adapter's fast paths of issue 5): a range call answers cell by cell exactly what
+ * A range call answers cell by cell exactly what
  * the function answers for that cell's values given one by one. For every function of
  * functions.json, arguments are generated (mostly valid, sometimes anything), the broadcast ones
  * shaped as ranges that can be combined (R×C, 1×C, R×1, 1×1), and each cell of the range result

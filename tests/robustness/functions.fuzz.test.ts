@@ -1,5 +1,5 @@
 /**
- * Issue 6: every worksheet function in dist/functions.json, called through the production bundle
+ * Every worksheet function in dist/functions.json, called through the production bundle
  * the way Excel calls it, with arbitrary arguments (see support.ts for what is generated), answers
  * with something Excel can show:
  *   a finite number, a text, a boolean, a CustomFunctions.Error, or a non-empty rectangular 2-D

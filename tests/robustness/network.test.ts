@@ -1,5 +1,5 @@
 /**
- * Issue 6: the functions bundle makes no request of any kind. It is evaluated with recording stubs
+ * The functions bundle makes no request of any kind. It is evaluated with recording stubs
  * of every way a page can reach the network (fetch, XMLHttpRequest, WebSocket, EventSource,
  * importScripts, navigator.sendBeacon, Image, Worker, WebTransport, RTCPeerConnection), every
  * function of functions.json is called with valid and with arbitrary arguments (promises awaited),

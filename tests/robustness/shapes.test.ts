@@ -1,5 +1,5 @@
 /**
- * Issue 6, shape rules (documented in functions/adapter.ts and the README's conventions): ranges
+ * Shape rules (documented in functions/adapter.ts and the README's conventions): ranges
  * broadcast Excel-style (a single value with a range, equal shapes element by element, a single
  * row against a single column gives the full table); shapes that cannot be combined, say 2×3
  * against 3×2, give ONE #VALUE! whose message names each range's shape. Arguments read whole

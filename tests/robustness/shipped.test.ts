@@ -1,5 +1,5 @@
 /**
- * Issue 6: nothing in the shipped bundles turns text into code. Every JavaScript file under dist/,
+ * Nothing in the shipped bundles turns text into code. Every JavaScript file under dist/,
  * and every inline script of every HTML page there, is searched for eval, the Function constructor
  * (with or without `new`) and string arguments to setTimeout/setInterval.
  *

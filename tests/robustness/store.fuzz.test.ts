@@ -1,5 +1,5 @@
 /**
- * Issue 6, the stored table: the reader (src/store/stored.ts, readStoredText) is fed damaged,
+ * The stored table: the reader (src/store/stored.ts, readStoredText) is fed damaged,
  * truncated, oversized and foreign content. It must answer every input without throwing, refuse
  * what it cannot use with a problem of a known kind and a one-line message in plain words, change
  * nothing it was given (the built-in records are frozen), and accept only tables that are whole:
@@ -138,15 +138,24 @@ const edited: fc.Arbitrary<string> = fc
     const doc = JSON.parse(t) as Record<string, unknown>;
     const paths: Array<[Record<string, unknown> | unknown[], string | number]> = [];
     const walk = (x: unknown): void => {
-      if (Array.isArray(x)) x.forEach((v, k) => (paths.push([x, k]), walk(v)));
-      else if (typeof x === 'object' && x !== null) for (const k of Object.keys(x)) paths.push([x as Record<string, unknown>, k]), walk((x as Record<string, unknown>)[k]);
+      if (Array.isArray(x)) {
+        x.forEach((v, k) => {
+          paths.push([x, k]);
+          walk(v);
+        });
+      } else if (typeof x === 'object' && x !== null) {
+        for (const k of Object.keys(x)) {
+          paths.push([x as Record<string, unknown>, k]);
+          walk((x as Record<string, unknown>)[k]);
+        }
+      }
     };
     walk(doc);
     const [holder, key] = paths[pick % paths.length];
     if (op === 'delete') {
       if (Array.isArray(holder)) holder.splice(key as number, 1);
       else delete holder[key as string];
-    } else if (op === 'add' && !Array.isArray(holder)) (holder as Record<string, unknown>)[`x${pick % 7}`] = value;
+    } else if (op === 'add' && !Array.isArray(holder)) (holder)[`x${pick % 7}`] = value;
     else (holder as Record<string | number, unknown>)[key] = value;
     if (recompute) {
       try {

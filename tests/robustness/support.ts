@@ -1,5 +1,5 @@
 /**
- * Shared pieces of the robustness suite (issue 6): what Excel may hand a worksheet function, and
+ * Shared pieces of the robustness suite: what Excel may hand a worksheet function, and
  * what a worksheet function may hand back.
  *
  * - `argumentsFor(meta)` generates a full argument list for one function of dist/functions.json:

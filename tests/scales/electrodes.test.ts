@@ -1,5 +1,5 @@
 /**
- * The built-in reference-electrode table (data/electrodes.json): every electrode issue 3 asks for is
+ * The built-in reference-electrode table (data/electrodes.json): every electrode the functions document is
  * there, every row is usable and names its source, and says whether a liquid junction is included.
  */
 import { describe, expect, it } from 'vitest';
@@ -27,7 +27,7 @@ const REQUIRED = [
 ];
 
 describe('data/electrodes.json', () => {
-  it('holds every electrode of issue 3, by key or alias', () => {
+  it('holds every electrode of the reference scales in use, by key or alias', () => {
     const t = builtinTable();
     for (const k of REQUIRED) expect(t.findElectrode(k), k).toBeDefined();
   });

@@ -105,14 +105,14 @@ describe('stored table: damage is found, never papered over', () => {
     ['empty', () => '  ', 'empty'],
     ['a number instead of text', () => 42, 'not-ours'],
     ['someone else\'s JSON', () => JSON.stringify({ theme: 'dark' }), 'not-ours'],
-    ['no format mark', (t) => JSON.stringify({ ...JSON.parse(t as string), format: undefined }), 'not-ours'],
-    ['an unknown field', (t) => JSON.stringify({ ...JSON.parse(t as string), extra: 1 }), 'damaged'],
-    ['a field missing', (t) => JSON.stringify({ ...JSON.parse(t as string), removed: undefined }), 'damaged'],
-    ['a bad revision', (t) => JSON.stringify({ ...JSON.parse(t as string), revision: 'x' }), 'damaged'],
-    ['a row that is not a record', (t) => { const d = JSON.parse(t as string); d.couples[0] = 'Cu'; return JSON.stringify(d); }, 'damaged'],
-    ['an unknown row field', (t) => { const d = JSON.parse(t as string); d.couples[0].colour = 'red'; return JSON.stringify(d); }, 'damaged'],
-    ['a changed number', (t) => (t as string).replace('"e0":0.3372', '"e0":0.3472'), 'checksum'],
-    ['a bad checksum text', (t) => (t as string).replace(/"checksum":"[^"]+"/, '"checksum":"md5:1"'), 'damaged'],
+    ['no format mark', (t) => JSON.stringify({ ...JSON.parse(t), format: undefined }), 'not-ours'],
+    ['an unknown field', (t) => JSON.stringify({ ...JSON.parse(t), extra: 1 }), 'damaged'],
+    ['a field missing', (t) => JSON.stringify({ ...JSON.parse(t), removed: undefined }), 'damaged'],
+    ['a bad revision', (t) => JSON.stringify({ ...JSON.parse(t), revision: 'x' }), 'damaged'],
+    ['a row that is not a record', (t) => { const d = JSON.parse(t); d.couples[0] = 'Cu'; return JSON.stringify(d); }, 'damaged'],
+    ['an unknown row field', (t) => { const d = JSON.parse(t); d.couples[0].colour = 'red'; return JSON.stringify(d); }, 'damaged'],
+    ['a changed number', (t) => (t).replace('"e0":0.3372', '"e0":0.3472'), 'checksum'],
+    ['a bad checksum text', (t) => (t).replace(/"checksum":"[^"]+"/, '"checksum":"md5:1"'), 'damaged'],
   ];
   for (const [name, damage, kind] of cases) {
     it(`${name} → ${kind}`, () => {

@@ -158,7 +158,8 @@ describe('row messages echo values short', () => {
     expect(validateCoupleRecord({ ...zinc, e0: null }).problems).toEqual(['E° must be a number; got nothing']);
     const long = 'volts'.repeat(10000);
     const [m] = validateCoupleRecord({ ...zinc, e0: long }).problems;
-    expect(m).toBe(`E° must be a number; got "${long.slice(0, 40)}…"`);
+    // The same quoting as a cell's message (src/text/quote.ts): 37 characters and "…".
+    expect(m).toBe(`E° must be a number; got "${long.slice(0, 37)}…"`);
   });
 
   it('a huge key or half-reaction text is cut as well', () => {

@@ -8,7 +8,7 @@
  * the handover is made after k microtask turns, for every k from 0 until the read has settled.
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { TABLE_SETTING_KEY } from '../../functions/workbookStore';
+import { TABLE_SETTING_KEY } from '../../workbook/store';
 import { applyChange } from '../../src/store/copy';
 import { builtinChecksum, forgetLastRead, readStoredText, writeStoredText } from '../../src/store/stored';
 import { builtin } from '../store/fixtures';

@@ -8,6 +8,10 @@
  */
 import { OfficeMockObject } from 'office-addin-mock';
 
+/** office-addin-mock objects take any property path; the tests read and set them freely. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+type MockRecord = Record<string, any>;
+
 export interface SheetWrite {
   readonly address: string;
   values?: unknown[][];
@@ -40,7 +44,7 @@ type Op = { write: boolean; apply: () => void };
 function makeContext(file: WorkbookFile): unknown {
   const queue: Op[] = [];
   const created: OfficeMockObject[] = [];
-  const ranges: Array<{ sheet: string; mock: Record<string, any>; address: string }> = [];
+  const ranges: Array<{ sheet: string; mock: MockRecord; address: string }> = [];
 
   const settingItem = (key: string) => {
     const present = file.settings.has(key);
@@ -59,7 +63,7 @@ function makeContext(file: WorkbookFile): unknown {
   const sheetObject = (name: string) => ({
     name,
     getRange(address: string) {
-      const mock = new OfficeMockObject({ format: { font: { bold: false }, columnWidth: 0, wrapText: false } }) as unknown as Record<string, any>;
+      const mock = new OfficeMockObject({ format: { font: { bold: false }, columnWidth: 0, wrapText: false } }) as unknown as MockRecord;
       ranges.push({ sheet: name, mock, address });
       return mock;
     },
@@ -129,7 +133,7 @@ function makeContext(file: WorkbookFile): unknown {
       }
       for (const c of created.splice(0)) await c.sync();
     },
-  }) as unknown as Record<string, any>;
+  }) as unknown as MockRecord;
   // Collections that office-addin-mock cannot model (arrays of items) are plain objects.
   context.workbook.worksheets = worksheets;
   return context;
@@ -151,8 +155,8 @@ export function excelFor(file: WorkbookFile): unknown {
 /** An `Office` global as Excel's shared runtime presents it (host Excel, every requirement set supported). */
 export function officeFor(host: 'Excel' | null = 'Excel', supported = true): unknown {
   const office = new OfficeMockObject({
-    onReady: async function () {
-      return { host, platform: host === null ? null : 'OfficeOnline' };
+    onReady: function () {
+      return Promise.resolve({ host, platform: host === null ? null : 'OfficeOnline' });
     },
   }) as unknown as Record<string, unknown>;
   office.HostType = { Excel: 'Excel' };

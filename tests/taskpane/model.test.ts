@@ -8,7 +8,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { STDPOTENTIAL } from '../../functions/families/table';
 import { installFunctionsHost, useStoredValue } from '../../functions/workbookHost';
-import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../functions/workbookStore';
+import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../workbook/store';
 import { exportCsv, importCsv } from '../../src/store/csv';
 import { type VersionedRecords } from '../../src/store/rows';
 import { contentChecksum, forgetLastRead, writeSchema1Text, writeStoredText } from '../../src/store/stored';
@@ -28,7 +28,7 @@ function model(b: VersionedRecords = B): TableModel {
 
 /** What a cell =CELLWRIGHT.STDPOTENTIAL(key) shows now. */
 async function cellE0(key: string): Promise<unknown> {
-  const r = (await STDPOTENTIAL([[key]], null as never)) as unknown[][];
+  const r = (await STDPOTENTIAL([[key]], null)) as unknown[][];
   return r[0][0];
 }
 

@@ -7,7 +7,7 @@
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../functions/workbookStore';
+import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../workbook/store';
 import { applyChange, pinnedCopy } from '../../src/store/copy';
 import { writeStoredText } from '../../src/store/stored';
 import { loadBundle } from '../bundle/harness';

@@ -13,7 +13,7 @@
  * told that too. A stored value that cannot be read is never written over except by an explicit reset
  * that names the exact value it replaces.
  */
-import { type WorkbookCopy } from '../src/store/copy';
+import type { WorkbookCopy } from '../src/store/copy';
 import type { VersionedRecords } from '../src/store/rows';
 import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } from '../src/store/stored';
 
@@ -56,7 +56,8 @@ export async function readStoredValue(): Promise<unknown> {
     const item = context.workbook.settings.getItemOrNullObject(TABLE_SETTING_KEY);
     item.load('value');
     await context.sync();
-    return item.isNullObject ? null : item.value;
+    const value: unknown = item.isNullObject ? null : item.value;
+    return value;
   });
 }
 
@@ -115,7 +116,7 @@ async function replaceValue(seen: unknown, next: string | null, builtin: Version
     const item = settings.getItemOrNullObject(TABLE_SETTING_KEY);
     item.load('value');
     await context.sync();
-    const current = item.isNullObject ? null : item.value;
+    const current: unknown = item.isNullObject ? null : item.value;
     if (!sameStoredValue(current, seen)) return { changed: true as const, current };
     if (next === null) {
       if (!item.isNullObject) item.delete();
