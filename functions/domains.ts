@@ -62,5 +62,7 @@ export const domains = {
   efficiency: bounded({ lo: 0, hi: 1, hiIncl: true }, 'a fraction in (0, 1]'),
   /** Transfer coefficients. */
   unitInterval: bounded({ lo: 0, hi: 1 }, 'a fraction in (0, 1)'),
+  /** Fractions 0…1 inclusive (coating breakdown factors). */
+  fraction: bounded({ lo: 0, loIncl: true, hi: 1, hiIncl: true }, 'between 0 and 1'),
   pH: bounded({ lo: -5, loIncl: true, hi: 20, hiIncl: true }, 'between −5 and 20'),
 } satisfies Record<string, Domain>;

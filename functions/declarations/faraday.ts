@@ -5,7 +5,7 @@
 import * as F from '../families/faraday';
 
 /**
- * Molar mass of a formula in g/mol from IUPAC standard atomic weights; parentheses, square brackets and hydrate dots (·, * or .) understood.
+ * Molar mass of a formula in g/mol from IUPAC standard atomic weights, summed exactly in decimal; parentheses, square brackets and hydrate dots (·, * or .) understood. A space is read only as a hydrate dot before a number ("CuSO4 5H2O" = "CuSO4·5H2O"); any other space inside a formula is #VALUE!. Case matters: a capital starts a new element, so "CO" is carbon monoxide (28.01) and "Co" cobalt (58.93); the deposition functions refuse "NI", "CU", "CO"… and ask which element was meant. Unicode subscripts and superscripts (NiSO₄, Cu²⁺) read as ASCII.
  * @customfunction MOLARMASS
  * @helpurl https://localhost:3000/docs/functions.html#molarmass
  * @param formula Chemical formula, e.g. "NiSO4·6H2O" or "K3[Fe(CN)6]" (element symbols are case-sensitive).
@@ -32,7 +32,7 @@ function ecequiv(species: any[][], n: any[][]): any[][] {
  * @customfunction DEPOSITMASS
  * @helpurl https://localhost:3000/docs/functions.html#depositmass
  * @param current_A Current, in A.
- * @param time_h Time, in h.
+ * @param time_h Time, in h (an Excel time value is a fraction of a day: multiply it by 24).
  * @param species Formula such as "Cu", or a molar mass in g/mol.
  * @param n Electrons per formula unit (a whole number ≥ 1).
  * @param [efficiency] Current efficiency as a fraction, 0 to 1 (default 1).
@@ -62,7 +62,7 @@ function deposittime(mass_g: any[][], current_A: any[][], species: any[][], n: a
  * @customfunction PLATETHICKNESS
  * @helpurl https://localhost:3000/docs/functions.html#platethickness
  * @param current_density_A_dm2 Current density, in A/dm².
- * @param time_min Plating time, in min.
+ * @param time_min Plating time, in min (an Excel time value is a fraction of a day: multiply it by 1440).
  * @param species Formula such as "Ni", or a molar mass in g/mol.
  * @param n Electrons per formula unit (a whole number ≥ 1).
  * @param density_g_cm3 Density of the deposit, in g/cm³.
@@ -95,7 +95,7 @@ function platetime(thickness_um: any[][], current_density_A_dm2: any[][], specie
  * @helpurl https://localhost:3000/docs/functions.html#currentefficiency
  * @param mass_g Mass obtained, in g.
  * @param current_A Current, in A.
- * @param time_h Time, in h.
+ * @param time_h Time, in h (an Excel time value is a fraction of a day: multiply it by 24).
  * @param species Formula such as "Cu", or a molar mass in g/mol.
  * @param n Electrons per formula unit (a whole number ≥ 1).
  * @returns Efficiency as a fraction.
@@ -119,17 +119,18 @@ function specificenergy(cell_voltage_V: any[][], species: any[][], n: any[][], e
 }
 
 /**
- * Volume of ideal gas evolved by a current, in L, at a temperature (°C) and pressure (bar).
+ * Volume of gas evolved by a current (ideal gas, dry basis unless saturated is TRUE), in L.
  * @customfunction GASVOLUME
  * @helpurl https://localhost:3000/docs/functions.html#gasvolume
  * @param current_A Current, in A.
- * @param time_h Time, in h.
+ * @param time_h Time, in h (hours, not an Excel time value: an Excel time is a fraction of a day, multiply it by 24; 30 min is 0.5).
  * @param n Electrons per gas molecule (2 for H2 and Cl2, 4 for O2).
- * @param [temperature_C] Gas temperature in °C (default 25).
- * @param [pressure_bar] Gas pressure in bar (default 1).
  * @param [efficiency] Current efficiency as a fraction, 0 to 1 (default 1).
+ * @param [temperature_C] Gas temperature in °C (default 25).
+ * @param [pressure_bar] Total gas pressure in bar (default 1).
+ * @param [saturated] FALSE: dry gas at the total pressure. TRUE: gas saturated with water vapour at the temperature (IAPWS-IF97 saturation pressure), so the volume is larger by p/(p − p_water) (default FALSE).
  * @returns Volume in L.
  */
-function gasvolume(current_A: any[][], time_h: any[][], n: any[][], temperature_C?: any[][], pressure_bar?: any[][], efficiency?: any[][]): any[][] {
-  return F.GASVOLUME(current_A, time_h, n, temperature_C, pressure_bar, efficiency) as any;
+function gasvolume(current_A: any[][], time_h: any[][], n: any[][], efficiency?: any[][], temperature_C?: any[][], pressure_bar?: any[][], saturated?: any[][]): any[][] {
+  return F.GASVOLUME(current_A, time_h, n, efficiency, temperature_C, pressure_bar, saturated) as any;
 }

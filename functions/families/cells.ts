@@ -16,7 +16,7 @@ const potentialAt = (x: CoupleRow | number, t: number): number => (typeof x === 
 
 export const EMF = worksheet({
   id: 'EMF',
-  description: 'Standard cell EMF E°cell = E°(cathode) − E°(anode), in V. Never reorders: a pairing that does not run by itself gives a negative value.',
+  description: 'Standard cell EMF E°cell = E°(cathode) − E°(anode), in V. Never reorders: a pairing that does not run by itself gives a negative value. Sign convention: positive when the reaction runs by itself (galvanic); an electrolysis as written is negative, and DECOMPOSITIONVOLTAGE gives its positive decomposition voltage.',
   args: [
     { ...coupleOrPotential('cathode'), help: 'Couple key (e.g. "Cu2+/Cu") or a potential in V vs SHE.' },
     { ...coupleOrPotential('anode'), help: 'Couple key (e.g. "Zn2+/Zn") or a potential in V vs SHE.' },
@@ -30,7 +30,7 @@ export const EMF = worksheet({
 
 export const GALVANIC = worksheet({
   id: 'GALVANIC',
-  description: 'Arranges two couples as a galvanic cell: spills 1×3 [E°cell in V (≥ 0), cathode key, anode key].',
+  description: 'Arranges two couples as a galvanic cell: spills 1×3 [E°cell in V (≥ 0), cathode key, anode key]. It compares standard potentials, not the potentials metals take in service: not a design driving voltage for anodes (ANODEDATA, ANODEOUTPUT) nor a galvanic series (GALVANICSERIES; passive stainless steel, for one, is noble in seawater).',
   args: [
     { ...couple('couple1'), help: 'A couple key (e.g. "Zn2+/Zn").' },
     { ...couple('couple2'), help: 'Another couple key (e.g. "Cu2+/Cu").' },
@@ -71,7 +71,7 @@ export const CELLREACTION = worksheet({
 
 export const CELLPOTENTIAL = worksheet({
   id: 'CELLPOTENTIAL',
-  description: 'Cell potential at a reaction quotient: E = E°cell − (RT/nF)·ln Q, in V, with n from CELLELECTRONS and Q of the reaction CELLREACTION writes.',
+  description: 'Cell potential at a reaction quotient: E = E°cell − (RT/nF)·ln Q, in V, with n from CELLELECTRONS and Q of the reaction CELLREACTION writes. Sign convention: positive when the reaction runs by itself; an electrolysis as written is negative (its decomposition voltage is −E).',
   args: [
     { ...couple('cathode'), help: 'Couple key of the cathode (where reduction happens).' },
     { ...couple('anode'), help: 'Couple key of the anode.' },

@@ -17,59 +17,77 @@ const arg = (a: Arg): Arg => a;
 
 export const MASSLOSSRATE = worksheet({
   id: 'MASSLOSSRATE',
+  description: 'Corrosion rate of a coupon from its mass loss, K·W/(A·T·D) (ASTM G1 §8.1.2; G31), with K = 8.76e4 for mm/y, 8.76e7 µm/y, 3.45e6 mpy, 3.45e3 in/y.',
   args: [
-    arg({ name: 'mass_loss_g', kind: 'number', domain: domains.nonNegative, unit: 'g', help: 'Mass loss of the cleaned coupon.' }),
-    arg({ name: 'area_cm2', kind: 'number', domain: domains.positive, unit: 'cm²', help: 'Exposed area.' }),
-    arg({ name: 'time_h', kind: 'number', domain: domains.positive, unit: 'h', help: 'Exposure time.' }),
-    arg({ name: 'density_g_cm3', kind: 'number', domain: domains.positive, unit: 'g/cm³', help: 'Density of the metal, 0.5 to 23 g/cm³ (7870 is refused as kg/m³).' }),
-    arg({ name: 'unit', kind: 'text', optional: true, default: 'mm/y', unit: '', help: '"mm/y" (default), "um/y", "mpy" or "in/y".' }),
+    arg({ name: 'mass_loss_g', kind: 'number', domain: domains.nonNegative, unit: 'g', help: 'Mass loss, g.' }),
+    arg({ name: 'area_cm2', kind: 'number', domain: domains.positive, unit: 'cm²', help: 'Exposed area, cm².' }),
+    arg({ name: 'time_h', kind: 'number', domain: domains.positive, unit: 'h', help: 'Exposure time, h.' }),
+    arg({ name: 'density_g_cm3', kind: 'number', domain: domains.positive, unit: 'g/cm³', help: 'Density, g/cm³ (0.5 to 23).' }),
+    arg({ name: 'unit', kind: 'text', optional: true, default: 'mm/y', unit: '', help: '"mm/y", "um/y", "mpy" or "in/y" (default "mm/y").' }),
   ],
+  result: 'Rate in the unit asked.',
+  helpAnchor: 'masslossrate',
   compute: massLossRate,
 });
 
 export const PITTINGFACTOR = worksheet({
   id: 'PITTINGFACTOR',
+  description: 'Pitting factor (ASTM G46): deepest pit over average penetration (1 = uniform).',
   args: [
-    arg({ name: 'deepest_pit', kind: 'number', domain: domains.positive, unit: 'any length', help: 'Depth of the deepest pit.' }),
-    arg({ name: 'average_penetration', kind: 'number', domain: domains.positive, unit: 'same unit', help: 'Average penetration from mass loss, same unit.' }),
+    arg({ name: 'deepest_pit', kind: 'number', domain: domains.positive, unit: 'any length', help: 'Deepest pit depth.' }),
+    arg({ name: 'average_penetration', kind: 'number', domain: domains.positive, unit: 'same unit', help: 'Average penetration, same unit.' }),
   ],
+  result: 'Pitting factor (dimensionless).',
+  helpAnchor: 'pittingfactor',
   compute: pittingFactor,
 });
 
 export const STERNGEARYB = worksheet({
   id: 'STERNGEARYB',
+  description: 'Corrosion current density B/Rp from a given Stern–Geary constant, in µA/cm² (ASTM G59, G102).',
   args: [
-    arg({ name: 'B_V', kind: 'number', domain: domains.positive, unit: 'V', help: 'Stern–Geary constant B in V (e.g. 0.026; 0 to 0.2 V, a value like 26 is refused as mV).' }),
-    arg({ name: 'polarization_resistance_ohm_cm2', kind: 'number', domain: domains.positive, unit: 'Ω·cm²', help: 'Polarization resistance Rp (1 to 1e9 Ω·cm²).' }),
+    arg({ name: 'B_V', kind: 'number', domain: domains.positive, unit: 'V', help: 'Stern–Geary constant B, V (e.g. 0.026).' }),
+    arg({ name: 'polarization_resistance_ohm_cm2', kind: 'number', domain: domains.positive, unit: 'Ω·cm²', help: 'Polarization resistance, Ω·cm².' }),
   ],
+  result: 'Current density in µA/cm².',
+  helpAnchor: 'sterngearyb',
   compute: icorrFromB,
 });
 
 export const RATECONVERT = worksheet({
   id: 'RATECONVERT',
+  description: 'Converts between µA/cm², mA/m², A/m², mm/y, µm/y and mpy; between a current density and a penetration rate by ASTM G102 (K1 = 3.27e-3 mm·g/(µA·cm·y)), which needs the equivalent weight and density.',
   args: [
-    arg({ name: 'value', kind: 'number', domain: domains.nonNegative, unit: 'from_unit', help: 'The rate or current density to convert.' }),
+    arg({ name: 'value', kind: 'number', domain: domains.nonNegative, unit: 'from_unit', help: 'Value to convert.' }),
     arg({ name: 'from_unit', kind: 'text', unit: '', help: '"uA/cm2", "mA/m2", "A/m2", "mm/y", "um/y" or "mpy".' }),
-    arg({ name: 'to_unit', kind: 'text', unit: '', help: 'Unit wanted, as from_unit.' }),
-    arg({ name: 'equivalent_weight_g', kind: 'number', optional: true, default: null, domain: domains.positive, unit: 'g', help: 'Equivalent weight (EQUIVWEIGHT; 2 to 250 g), needed between a current and a penetration.' }),
-    arg({ name: 'density_g_cm3', kind: 'number', optional: true, default: null, domain: domains.positive, unit: 'g/cm³', help: 'Density (0.5 to 23 g/cm³), needed between a current and a penetration.' }),
+    arg({ name: 'to_unit', kind: 'text', unit: '', help: 'Unit wanted.' }),
+    arg({ name: 'equivalent_weight_g', kind: 'number', optional: true, default: null, domain: domains.positive, unit: 'g', help: 'Equivalent weight, g.' }),
+    arg({ name: 'density_g_cm3', kind: 'number', optional: true, default: null, domain: domains.positive, unit: 'g/cm³', help: 'Density, g/cm³.' }),
   ],
+  result: 'The value in to_unit.',
+  helpAnchor: 'rateconvert',
   compute: rateConvert,
 });
 
 export const EQUIVWEIGHT = worksheet({
   id: 'EQUIVWEIGHT',
+  description: 'Alloy equivalent weight EW = 1/Σ(fᵢ·nᵢ/Wᵢ) in g (ASTM G102 §5.2), from element symbols, mass fractions and valences (ranges of equal length; IUPAC atomic weights).',
   args: [
-    arg({ name: 'elements', kind: 'textList', unit: '', help: 'Element symbols (a range), e.g. Fe, Cr, Ni.' }),
-    arg({ name: 'mass_fractions', kind: 'numberList', domain: domains.nonNegative, unit: '', help: 'Mass fractions (0 to 1), same length.' }),
-    arg({ name: 'valences', kind: 'numberList', domain: domains.positiveInteger, unit: '', help: 'Electrons given up per atom, same length.' }),
+    arg({ name: 'elements', kind: 'textList', unit: '', help: 'Element symbols, a range.' }),
+    arg({ name: 'mass_fractions', kind: 'numberList', domain: domains.nonNegative, unit: '', help: 'Mass fractions 0 to 1, a range.' }),
+    arg({ name: 'valences', kind: 'numberList', domain: domains.positiveInteger, unit: '', help: 'Valences, a range.' }),
   ],
+  result: 'Equivalent weight in g.',
+  helpAnchor: 'equivweight',
   compute: equivWeight,
 });
 
 export const GALVANICSERIES = worksheet({
   id: 'GALVANICSERIES',
-  args: [arg({ name: 'alloy', kind: 'text', unit: '', help: 'Alloy name as in the series (e.g. "Zinc", "Mild steel, cast iron", "Stainless steel type 316, 317 (passive)"); a unique part of a name is enough.' })],
+  description: 'Corrosion-potential range of an alloy in flowing seawater from a practical galvanic series, spills 1×2 [most negative, most positive] in V vs SCE. Measured corrosion potentials, for comparing alloys; not standard potentials (GALVANIC).',
+  args: [arg({ name: 'alloy', kind: 'text', unit: '', help: 'Alloy name, e.g. "Zinc", "Mild steel, cast iron", "Copper".' })],
+  result: 'Two potentials in V vs SCE.',
+  helpAnchor: 'galvanicseries',
   compute: (alloy: string) => {
     const r = galvanicSeries(alloy);
     return [r.min_V, r.max_V];

@@ -21,7 +21,7 @@ const efficiency: ArgSpec = optNum('efficiency', 1, domains.efficiency);
 
 export const MOLARMASS = worksheet({
   id: 'MOLARMASS',
-  description: 'Molar mass of a formula in g/mol from IUPAC standard atomic weights; parentheses, square brackets and hydrate dots (·, * or .) understood.',
+  description: 'Molar mass of a formula in g/mol from IUPAC standard atomic weights, summed exactly in decimal; parentheses, square brackets and hydrate dots (·, * or .) understood. A space is read only as a hydrate dot before a number ("CuSO4 5H2O" = "CuSO4·5H2O"); any other space inside a formula is #VALUE!. Case matters: a capital starts a new element, so "CO" is carbon monoxide (28.01) and "Co" cobalt (58.93); the deposition functions refuse "NI", "CU", "CO"… and ask which element was meant. Unicode subscripts and superscripts (NiSO₄, Cu²⁺) read as ASCII.',
   args: [
     { name: 'formula', kind: 'text', help: 'Chemical formula, e.g. "NiSO4·6H2O" or "K3[Fe(CN)6]" (element symbols are case-sensitive).' },
   ],
@@ -47,7 +47,7 @@ export const DEPOSITMASS = worksheet({
   description: 'Mass deposited or dissolved by a current (Faraday\'s law), in g.',
   args: [
     { ...num('current_A', domains.nonNegative, 'A'), help: 'Current, in A.' },
-    { ...num('time_h', domains.nonNegative, 'h'), help: 'Time, in h.' },
+    { ...num('time_h', domains.nonNegative, 'h'), help: 'Time, in h (an Excel time value is a fraction of a day: multiply it by 24).' },
     { ...species, help: 'Formula such as "Cu", or a molar mass in g/mol.' },
     { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
     { ...efficiency, help: 'Current efficiency as a fraction, 0 to 1 (default 1).' },
@@ -77,7 +77,7 @@ export const PLATETHICKNESS = worksheet({
   description: 'Thickness of a uniform deposit, in µm, from current density (A/dm²), time (min) and deposit density (g/cm³).',
   args: [
     { ...num('current_density_A_dm2', domains.nonNegative, 'A/dm²'), help: 'Current density, in A/dm².' },
-    { ...num('time_min', domains.nonNegative, 'min'), help: 'Plating time, in min.' },
+    { ...num('time_min', domains.nonNegative, 'min'), help: 'Plating time, in min (an Excel time value is a fraction of a day: multiply it by 1440).' },
     { ...species, help: 'Formula such as "Ni", or a molar mass in g/mol.' },
     { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
     { ...num('density_g_cm3', domains.positive, 'g/cm³'), help: 'Density of the deposit, in g/cm³.' },
@@ -110,7 +110,7 @@ export const CURRENTEFFICIENCY = worksheet({
   args: [
     { ...num('mass_g', domains.nonNegative, 'g'), help: 'Mass obtained, in g.' },
     { ...num('current_A', domains.positive, 'A'), help: 'Current, in A.' },
-    { ...num('time_h', domains.positive, 'h'), help: 'Time, in h.' },
+    { ...num('time_h', domains.positive, 'h'), help: 'Time, in h (an Excel time value is a fraction of a day: multiply it by 24).' },
     { ...species, help: 'Formula such as "Cu", or a molar mass in g/mol.' },
     { ...electrons, help: 'Electrons per formula unit (a whole number ≥ 1).' },
   ],
@@ -135,15 +135,15 @@ export const SPECIFICENERGY = worksheet({
 
 export const GASVOLUME = worksheet({
   id: 'GASVOLUME',
-  description: 'Volume of ideal gas evolved by a current, in L, at a temperature (°C) and pressure (bar).',
+  description: 'Volume of gas evolved by a current (ideal gas, dry basis unless saturated is TRUE), in L.',
   args: [
-    num('current_A', domains.nonNegative, 'A'),
-    num('time_h', domains.nonNegative, 'h'),
-    electrons,
-    efficiency,
-    temperatureC,
-    { name: 'pressure_bar', kind: 'number', optional: true, default: STANDARD_PRESSURE_BAR, domain: domains.positive, unit: 'bar' },
-    { name: 'saturated', kind: 'boolean', optional: true, default: false, unit: '' },
+    { ...num('current_A', domains.nonNegative, 'A'), help: 'Current, in A.' },
+    { ...num('time_h', domains.nonNegative, 'h'), help: 'Time, in h (hours, not an Excel time value: an Excel time is a fraction of a day, multiply it by 24; 30 min is 0.5).' },
+    { ...electrons, help: 'Electrons per gas molecule (2 for H2 and Cl2, 4 for O2).' },
+    { ...efficiency, help: 'Current efficiency as a fraction, 0 to 1 (default 1).' },
+    { ...temperatureC, help: 'Gas temperature in °C (default 25).' },
+    { name: 'pressure_bar', kind: 'number', optional: true, default: STANDARD_PRESSURE_BAR, domain: domains.positive, unit: 'bar', help: 'Total gas pressure in bar (default 1).' },
+    { name: 'saturated', kind: 'boolean', optional: true, default: false, unit: '', help: 'FALSE: dry gas at the total pressure. TRUE: gas saturated with water vapour at the temperature (IAPWS-IF97 saturation pressure), so the volume is larger by p/(p − p_water) (default FALSE).' },
   ],
   result: 'Volume in L.',
   helpAnchor: 'gasvolume',

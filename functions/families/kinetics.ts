@@ -16,7 +16,10 @@ const i0: ArgSpec = num('i0', domains.positive, 'any current-density unit');
 
 export const BUTLERVOLMER = worksheet({
   id: 'BUTLERVOLMER',
-  args: [i0, num('overpotential_V', domains.any, 'V'), alphaA, alphaC, temperatureC],
+  description: 'Butler–Volmer current density i0·[exp(αa·Fη/RT) − exp(−αc·Fη/RT)], in i0\'s units (anodic positive).',
+  args: [{ ...i0, help: 'Exchange current density (> 0), in any current-density unit.' }, { ...num('overpotential_V', domains.any, 'V'), help: 'Overpotential, in V (−5 to 5; a value like 250 is refused as millivolts).' }, { ...alphaA, help: 'Apparent anodic transfer coefficient (> 0, n included).' }, { ...alphaC, help: 'Apparent cathodic transfer coefficient (> 0; default 1 − alpha_a, which holds for single-electron steps only: give alpha_c for multi-electron reactions).' }, temperatureC],
+  result: 'Current density in i0\'s units.',
+  helpAnchor: 'butlervolmer',
   compute: (i: number, eta: number, aa: number, ac: number | null, t: number) => butlerVolmer(i, plausible('overpotential_V', eta, PLAUSIBLE.volts), aa, ac, t),
 });
 
@@ -37,21 +40,30 @@ export const OVERPOTENTIAL = worksheet({
 
 export const TAFELSLOPE = worksheet({
   id: 'TAFELSLOPE',
-  args: [num('alpha', domains.positive, ''), temperatureC],
+  description: 'Tafel slope RT·ln10/(αF), in V per decade (0.118 V for α = 0.5 at 25 °C).',
+  args: [{ ...num('alpha', domains.positive, ''), help: 'Apparent transfer coefficient (> 0, n included; 0.01 to 4, a value like 50 is refused as a percentage).' }, temperatureC],
+  result: 'V per decade.',
+  helpAnchor: 'tafelslope',
   compute: (a: number, t: number) => tafelSlope(plausible('alpha', a, PLAUSIBLE.alpha), t),
 });
 
 export const CORROSIONRATE = worksheet({
   id: 'CORROSIONRATE',
-  args: [num('icorr_uA_cm2', domains.nonNegative, 'µA/cm²'), num('equivalent_weight_g', domains.positive, 'g'), num('density_g_cm3', domains.positive, 'g/cm³')],
+  description: 'Uniform corrosion penetration rate K1·icorr·EW/ρ (Faraday\'s law, K1 of ASTM G102), in mm/year.',
+  args: [{ ...num('icorr_uA_cm2', domains.nonNegative, 'µA/cm²'), help: 'Corrosion current density, in µA/cm².' }, { ...num('equivalent_weight_g', domains.positive, 'g'), help: 'Equivalent weight, in g (molar mass over electrons per atom; 27.92 for iron; 2 to 250 g; EQUIVWEIGHT for alloys).' }, { ...num('density_g_cm3', domains.positive, 'g/cm³'), help: 'Density of the metal, in g/cm³ (0.5 to 23; a value like 7870 is refused as kg/m³).' }],
+  result: 'Penetration rate in mm/year.',
+  helpAnchor: 'corrosionrate',
   compute: (i: number, ew: number, rho: number) =>
     corrosionRate(i, plausible('equivalent_weight_g', ew, PLAUSIBLE.equivalentWeightG), plausible('density_g_cm3', rho, PLAUSIBLE.densityGcm3)),
 });
 
 export const STERNGEARY = worksheet({
   id: 'STERNGEARY',
-  args: [num('beta_a_V', domains.positive, 'V/decade'), num('beta_c_V', domains.nonZero, 'V/decade'), num('polarization_resistance_ohm_cm2', domains.positive, 'Ω·cm²')],
+  description: 'Corrosion current density from linear polarization (Stern–Geary), B/Rp with B = βa·βc/(2.303·(βa + βc)), in µA/cm².',
+  args: [{ ...num('beta_a_V', domains.positive, 'V/decade'), help: 'Anodic Tafel slope, in V per decade (0.005 to 1; a value like 120 is refused as mV/decade).' }, { ...num('beta_c_V', domains.nonZero, 'V/decade'), help: 'Cathodic Tafel slope in V per decade; a negative value, as instruments report it, is taken by its magnitude.' }, { ...num('polarization_resistance_ohm_cm2', domains.positive, 'Ω·cm²'), help: 'Polarization resistance, in Ω·cm² (1 to 1e9; given first by mistake it is refused as a Tafel slope).' }],
   // a cathodic slope reported as negative is taken by its magnitude
+  result: 'Corrosion current density in µA/cm².',
+  helpAnchor: 'sterngeary',
   compute: (ba: number, bc: number, rp: number) =>
     sternGeary(plausible('beta_a_V', ba, PLAUSIBLE.tafelV), Math.abs(plausible('beta_c_V', bc, PLAUSIBLE.tafelV)), plausible('polarization_resistance_ohm_cm2', rp, PLAUSIBLE.rpOhmCm2)),
 });

@@ -72,7 +72,10 @@ export function tableInfo(field: string): string | number {
 
 export const TABLEINFO = worksheet({
   id: 'TABLEINFO',
-  args: [{ name: 'field', kind: 'text', unit: '' }],
+  description: 'A fact about the potential table in use, for a template\'s header: "origin" (built-in, workbook, pinned built-in, unreadable), "version", "checksum" (SHA-256), "revision", "changed" (an Excel date serial), "couples", "electrodes", or "addin" (the add-in\'s version). Recalculates when the table changes.',
+  args: [{ name: 'field', kind: 'text', unit: '', help: 'One of "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin".' }],
+  result: 'The fact (text or number).',
+  helpAnchor: 'tableinfo',
   compute: (field: string) => tableInfo(field),
   usesTable: true,
 });

@@ -15,10 +15,10 @@ const scaleArg = (name: string): ArgSpec => ({ name, kind: 'text' });
 
 export const REFPOTENTIAL = worksheet({
   id: 'REFPOTENTIAL',
-  description: 'Potential of a reference electrode vs SHE, in V, from the electrode table; at another temperature E(25 °C) + (dE/dT)·(T − 25).',
+  description: 'Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table\'s dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction from the species data with the filling\'s activity held constant. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.',
   args: [
     { name: 'electrode', kind: 'electrode', help: 'Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).' },
-    { ...temperatureC, help: 'Temperature in °C (default 25; 0 to 100, and only where the table has dE/dT).' },
+    { ...temperatureC, help: 'Temperature in °C of the electrode (default 25; 0 to 100; saturated and field electrodes without dE/dT answer #N/A away from 25 °C).' },
   ],
   result: 'Potential in V vs SHE.',
   helpAnchor: 'refpotential',
@@ -28,13 +28,13 @@ export const REFPOTENTIAL = worksheet({
 
 export const CONVERTPOTENTIAL = worksheet({
   id: 'CONVERTPOTENTIAL',
-  description: 'The same potential on another scale, in V: "SHE", "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table.',
+  description: 'The same potential on another scale, in V: "SHE" (or "NHE"), "RHE" (needs pH; E_SHE = E_RHE − (RT ln10/F)·pH) or any reference electrode of the table. The reference electrode is assumed to be at the stated temperature (its potential at that temperature is used). Not for cathodic-protection criteria: the standards state −0.80 V Ag/AgCl/seawater, while −0.85 V CSE converts to about −0.78 V; compare a reading with the criterion stated for its own electrode (PROTECTIONCRITERION).',
   args: [
     { ...potential('potential_V'), help: 'Potential on the from_scale, in V.' },
-    { ...scaleArg('from_scale'), help: 'Scale the potential is given on: "SHE", "RHE" or an electrode key such as "CSE" or "SCE".' },
+    { ...scaleArg('from_scale'), help: 'Scale the potential is given on: "SHE" (or "NHE"), "RHE" or an electrode key such as "CSE" or "SCE".' },
     { ...scaleArg('to_scale'), help: 'Scale wanted: "SHE", "RHE" or an electrode key.' },
     { name: 'pH', kind: 'number', optional: true, default: null, domain: domains.pH, unit: '', help: 'pH of the solution, needed when either scale is "RHE" (no default).' },
-    temperatureC,
+    { ...temperatureC, help: 'Temperature in °C of the solution and of the reference electrode (default 25).' },
   ],
   result: 'Potential in V on the to_scale.',
   helpAnchor: 'convertpotential',

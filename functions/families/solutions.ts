@@ -24,10 +24,10 @@ export const IONICSTRENGTH = worksheet({
 
 export const ACTIVITYCOEF = worksheet({
   id: 'ACTIVITYCOEF',
-  description: 'Single-ion activity coefficient by "DHLL" (limiting law), "EDH" (extended Debye–Hückel, needs the ion size in Å) or "DAVIES"; A and B follow temperature (0 to 100 °C).',
+  description: 'Single-ion activity coefficient by "DHLL" (limiting law, I up to 0.005 mol/kg), "EDH" (extended Debye–Hückel, needs the ion size in Å; I up to 0.1) or "DAVIES" (I up to 0.5); beyond its range a model answers #VALUE!. A and B follow temperature (0 to 100 °C).',
   args: [
     { ...charge('charge'), help: 'Charge number of the ion (a whole number).' },
-    { ...strength, help: 'Ionic strength, in mol/kg.' },
+    { ...strength, help: 'Ionic strength, in mol/kg (within the model\'s range).' },
     { ...model, help: '"DHLL", "EDH" or "DAVIES" (default "DAVIES").' },
     temperatureC,
     { ...ionSize, help: 'Ion size parameter, in Å (required by "EDH", ignored otherwise).' },
@@ -39,11 +39,11 @@ export const ACTIVITYCOEF = worksheet({
 
 export const MEANACTIVITYCOEF = worksheet({
   id: 'MEANACTIVITYCOEF',
-  description: 'Mean ionic activity coefficient of a salt by "DHLL", "EDH" (needs the ion size in Å) or "DAVIES"; A and B follow temperature (0 to 100 °C).',
+  description: 'Mean ionic activity coefficient of a salt by "DHLL" (I up to 0.005 mol/kg), "EDH" (needs the ion size in Å; I up to 0.1) or "DAVIES" (I up to 0.5); beyond its range a model answers #VALUE!. A and B follow temperature (0 to 100 °C).',
   args: [
     { ...charge('z_cation', domains.nonZeroInteger), help: 'Charge of the cation (a whole number; only its magnitude counts).' },
     { ...charge('z_anion', domains.nonZeroInteger), help: 'Charge of the anion (a whole number; only its magnitude counts).' },
-    { ...strength, help: 'Ionic strength, in mol/kg.' },
+    { ...strength, help: 'Ionic strength, in mol/kg (within the model\'s range).' },
     { ...model, help: '"DHLL", "EDH" or "DAVIES" (default "DAVIES").' },
     temperatureC,
     { ...ionSize, help: 'Mean ion size parameter, in Å (required by "EDH", ignored otherwise).' },

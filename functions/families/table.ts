@@ -10,7 +10,7 @@ import { currentTable } from '../context';
 
 export const STDPOTENTIAL = worksheet({
   id: 'STDPOTENTIAL',
-  description: 'Standard potential of a couple, in V vs SHE; at another temperature E°(25 °C) + (dE°/dT)·(T − 25). #N/A when the couple has no stored dE°/dT and T ≠ 25 °C; #NUM! outside 0…100 °C.',
+  description: 'Standard potential of a couple, in V vs SHE at the same temperature. Away from 25 °C the table\'s E° moves by the species data (NBS 1982, ΔrH, ΔrS, ΔrCp) where they cover every species, else by the row\'s dE°/dT (E0BASIS says which). #N/A when neither covers the couple and T ≠ 25 °C; #NUM! outside 0…100 °C.',
   args: [
     { ...couple(), help: 'Key of the potential table, written Ox/Red (e.g. "Cu2+/Cu", "O2/H2O").' },
     { ...temperatureC, help: 'Temperature in °C, 0 to 100 (default 25).' },
@@ -62,4 +62,4 @@ function sourceOf(key: string, criterion: string | null): string {
   return row.source;
 }
 
-export const SOURCE = worksheet({ id: 'SOURCE', args: [{ name: 'couple', kind: 'text', unit: '' }, { name: 'criterion', kind: 'text', optional: true, default: null, unit: '' }], compute: sourceOf, usesTable: true });
+export const SOURCE = worksheet({ id: 'SOURCE', description: 'The published source of a couple\'s E° (and dE°/dT), or of a reference electrode\'s potential, as text.', args: [{ name: 'couple', kind: 'text', unit: '', help: 'Key of the potential table: a couple written Ox/Red, or a reference electrode (e.g. "CSE").' }, { name: 'criterion', kind: 'text', optional: true, default: null, unit: '', help: 'With an electrode key: a protection-criterion condition ("standard", "polarisation", "limit"), to get the clause and source of PROTECTIONCRITERION\'s answer.' }], result: 'The source (text).', helpAnchor: 'source', compute: sourceOf, usesTable: true });

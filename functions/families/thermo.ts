@@ -101,7 +101,7 @@ export const COMBINE = worksheet({
 
 export const EFROMTHERMO = worksheet({
   id: 'EFROMTHERMO',
-  description: 'Potential from ΔH and ΔS taken as constant: E = −(ΔH − TΔS)/(nF), in V.',
+  description: 'Potential from ΔH and ΔS taken as constant: E = −(ΔH − TΔS)/(nF), in V. Sign convention: positive when the reaction runs by itself; for water electrolysis (ΔH = +285.83 kJ/mol) it is negative, and the reversible voltage the cell needs is −E.',
   args: [
     { ...num('deltaH_kJ', domains.any, 'kJ/mol'), help: 'ΔH in kJ/mol.' },
     { ...num('deltaS_J_K', domains.any, 'J/(mol·K)'), help: 'ΔS in J/(mol·K).' },
@@ -115,7 +115,7 @@ export const EFROMTHERMO = worksheet({
 
 export const THERMONEUTRAL = worksheet({
   id: 'THERMONEUTRAL',
-  description: 'Thermoneutral potential −ΔH/(nF), in V (an electrolysis as written gives a negative value).',
+  description: 'Thermoneutral potential −ΔH/(nF), in V. Sign convention: ΔH of the reaction as written, so an electrolysis (ΔH > 0) gives a negative value and the thermoneutral voltage the cell needs is its magnitude (water at 25 °C: 1.481 V on the HHV basis, see VOLTAGEEFFICIENCY); entering ΔH with the other sign flips the result.',
   args: [
     { ...num('deltaH_kJ', domains.any, 'kJ/mol'), help: 'ΔH of the reaction as written, in kJ/mol.' },
     electrons,

@@ -20,7 +20,8 @@ export function specProblems(families) {
           continue;
         }
         if (a.default !== undefined && a.default !== null) {
-          const said = `default ${typeof a.default === 'string' ? `"${a.default}"` : a.default}`;
+          const shown = typeof a.default === 'string' ? `"${a.default}"` : typeof a.default === 'boolean' ? (a.default ? 'TRUE' : 'FALSE') : a.default;
+          const said = `default ${shown}`;
           if (!a.help.includes(said)) problems.push(`${where}: the help of ${a.name} does not say "${said}"`);
         }
         if (a.help.includes('*/')) problems.push(`${where}: the help of ${a.name} contains "*/"`);
@@ -75,7 +76,8 @@ export function familiesOf(modules, registry) {
   const families = [];
   for (const [family, mod] of [...modules].sort(([a], [b]) => a.localeCompare(b))) {
     const fns = new Set(Object.values(mod));
-    const specs = [...registry.values()].filter((r) => fns.has(r.fn)).map((r) => r.spec);
+    // by function, or by export name for a function the family wraps (e.g. one that adds a header row)
+    const specs = [...registry.values()].filter((r) => fns.has(r.fn) || mod[r.spec.id] !== undefined).map((r) => r.spec);
     families.push({ family, specs });
   }
   return families;

@@ -213,7 +213,7 @@ function checkRows(name: string, x: unknown, allowed: Set<string>, problems: str
 
 function checkKeyLists(name: string, x: unknown, problems: string[]): KeyLists {
   const ok = isPlainObject(x) && Object.keys(x).every((k) => k === 'couples' || k === 'electrodes');
-  const list = (v: unknown) => Array.isArray(v) && v.every(isText(MAX_KEY_CHARS));
+  const list = (v: unknown): v is string[] => Array.isArray(v) && v.every(isText(MAX_KEY_CHARS));
   if (!ok || !list(x.couples) || !list(x.electrodes)) {
     problems.push(`"${name}" is not { couples: [keys], electrodes: [keys] } with keys of at most ${MAX_KEY_CHARS} characters`);
     return { couples: [], electrodes: [] };
