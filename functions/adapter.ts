@@ -429,6 +429,11 @@ function memoLookUp<Row>(
 }
 
 /** "unknown couple "X"; …" with a key that exists in this table, or a near match of what was typed. */
+/** A hint that says what to write (a reversed couple, a missing filling); near matches are left to unknownKeyMessage. */
+function specificHint(hint: string): string {
+  return hint.startsWith('nearest keys') ? '' : hint;
+}
+
 function unknownKeyMessage(what: 'couple' | 'reference electrode', where: string, key: string, table: PotentialTable): string {
   const s = suggestKey(table, what === 'couple' ? 'couple' : 'electrode', key);
   if (s.near !== undefined) return `unknown ${what} ${show(key)}; did you mean "${s.near}"?`;
@@ -441,7 +446,7 @@ function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
     coupleMemo,
     key,
     (t, k) => t.findCouple(k),
-    (k, t) => { const h = coupleKeyHint(t, k); return notAvailable(h ? `unknown couple ${show(k)}; ${h}` : unknownKeyMessage('couple', 'the potential table', k, t)); },
+    (k, t) => { const h = specificHint(coupleKeyHint(t, k)); return notAvailable(h ? `unknown couple ${show(k)}; ${h}` : unknownKeyMessage('couple', 'the potential table', k, t)); },
   );
 }
 
@@ -450,7 +455,7 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
     electrodeMemo,
     key,
     (t, k) => t.findElectrode(k),
-    (k, t) => { const h = electrodeKeyHint(t, k); return notAvailable(h ? `unknown reference electrode ${show(k)}; ${h}` : unknownKeyMessage('reference electrode', 'the electrode table', k, t)); },
+    (k, t) => { const h = specificHint(electrodeKeyHint(t, k)); return notAvailable(h ? `unknown reference electrode ${show(k)}; ${h}` : unknownKeyMessage('reference electrode', 'the electrode table', k, t)); },
   );
 }
 
