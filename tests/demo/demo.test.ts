@@ -13,6 +13,7 @@ import { scenario } from '../../demo/scenario.mjs';
 import { cellwrightCalls, evaluate, isErrorValue, parseAddress, parseFormula, unwrap } from '../../scripts/lib/formula.mjs';
 import type { Scalar, Value } from '../../scripts/lib/formula.mjs';
 import { layoutSheet } from '../../scripts/lib/workbook.mjs';
+import { fromSavedFormula } from '../../scripts/lib/saved-form.mjs';
 import { loadBundle, type LoadedBundle } from '../bundle/harness';
 
 const ROOT = resolve(__dirname, '../..');
@@ -46,6 +47,8 @@ function formulaCells(ws: ExcelJS.Worksheet): FormulaCell[] {
     row.eachCell((cell) => {
       const v = cell.value as { formula?: string; shareType?: string; ref?: string } | null;
       if (!v || typeof v !== 'object' || typeof v.formula !== 'string') return;
+      // the file holds the saved form (_xldudf_CELLWRIGHT_X); compare as typed (CELLWRIGHT.X)
+      const formula = fromSavedFormula(v.formula);
       if (v.shareType === 'array' && v.ref) {
         const [a, b] = v.ref.split(':').map(parseAddress);
         const block: Scalar[][] = [];
@@ -54,9 +57,9 @@ function formulaCells(ws: ExcelJS.Worksheet): FormulaCell[] {
           for (let c = a.c; c <= b.c; c++) line.push(stored(ws.getCell(r, c)));
           block.push(line);
         }
-        out.push({ sheet: ws.name, addr: cell.address, formula: v.formula, ref: v.ref, cached: block });
+        out.push({ sheet: ws.name, addr: cell.address, formula, ref: v.ref, cached: block });
       } else {
-        out.push({ sheet: ws.name, addr: cell.address, formula: v.formula, cached: stored(cell) });
+        out.push({ sheet: ws.name, addr: cell.address, formula, cached: stored(cell) });
       }
     }),
   );
@@ -79,7 +82,7 @@ beforeAll(async () => {
   wb = new ExcelJS.Workbook();
   if (existsSync(XLSX)) await wb.xlsx.readFile(XLSX);
   bundle = loadBundle();
-});
+}, 60000);
 
 describe('npm run demo', () => {
   it('runs in seconds without an unexpected error and prints every sheet', () => {
