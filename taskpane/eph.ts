@@ -4,7 +4,7 @@
 // numbers as live CELLWRIGHT.HALFCELL formulas with a native scatter chart of them.
 import type { PotentialTable } from '../src/table/types';
 import { byId, h, replace } from './dom';
-import { ephSvg } from './ephChart';
+import { type SvgNode, ephSvgTree } from './ephChart';
 import { type EphSeries, ephSeries, pHGrid } from './ephData';
 
 const DEFAULT_COUPLES = ['Cu2+/Cu', 'Fe3+/Fe2+', 'O2/OH-'];
@@ -53,7 +53,7 @@ export function draw(): void {
     return;
   }
   write.disabled = r.series.length === 0;
-  out.innerHTML = ephSvg({ pHs: GRID, series: r.series, water: r.water, title: title(c), cursorPH: cursor });
+  replace(out, svgElement(ephSvgTree({ pHs: GRID, series: r.series, water: r.water, title: title(c), cursorPH: cursor })));
   // the readout: E at the cursor's pH for every line, from the same core call
   const at = ephSeries(table, chosen ?? [], { ...c, pHs: [cursor] });
   if (at.ok) {
@@ -67,6 +67,17 @@ export function draw(): void {
     h('thead', {}, h('tr', {}, h('th', { scope: 'col' }, 'pH'), ...all.map((s) => h('th', { scope: 'col' }, s.couple)))),
     h('tbody', {}, ...GRID.map((p, i) => h('tr', {}, h('th', { scope: 'row' }, String(p)), ...all.map((s) => h('td', {}, fmtE(s.e[i])))))),
   );
+}
+
+const SVG_NS = 'http://www.w3.org/2000/svg';
+
+/** DOM nodes from the chart's tree: attributes set one by one, text as text nodes. */
+function svgElement(t: SvgNode): Element {
+  const el = document.createElementNS(SVG_NS, t.tag);
+  for (const [k, v] of Object.entries(t.attrs)) if (k !== 'xmlns') el.setAttribute(k, String(v));
+  if (t.text !== undefined) el.appendChild(document.createTextNode(t.text));
+  for (const c of t.children ?? []) el.appendChild(svgElement(c));
+  return el;
 }
 
 function setCursor(pH: number): void {
