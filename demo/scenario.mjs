@@ -18,9 +18,9 @@ export const scenario = {
   howToUse: [
     'Each sheet lists inputs (plain values, yellow) and results (live CELLWRIGHT formulas, green). Every formula is stored with the value the Cellwright functions computed when this file was written.',
     'With the Cellwright add-in loaded in Excel (npm start, then sideload manifest.xml), change any input and the results recalculate; Ctrl+Alt+F9 recalculates every formula through the add-in.',
-    'This file was written by a script, not by Excel. If CELLWRIGHT cells still show #NAME? with the add-in loaded, have Excel re-read the formulas: Find & Replace "=" with "=" in formulas, or select a cell and press F2 then Enter.',
-    'Without the add-in, a viewer that shows stored values shows the results as computed. Excel usually recalculates a file written by another program when it opens it, and LibreOffice recalculates array formulas on opening; an CELLWRIGHT cell recalculated without the add-in shows #NAME?. The terminal output of npm run demo lists every value.',
-    'Spilled results (tables computed by one formula) are stored as array formulas over the range they fill; select the range to see the formula.',
+    'This file was written by the Cellwright demo script, not by Excel. Its formulas are stored in the form Excel uses for add-in functions, so Excel with the add-in loaded recognises them when it opens the file.',
+    'Without the add-in, a viewer that shows stored values shows the results as computed. A program that recalculates a cell without the add-in cannot compute it and shows an error there instead (LibreOffice, for one, recalculates spilled tables and text results on opening). The terminal output of npm run demo lists every value.',
+    'Spilled results (tables computed by one formula) are stored as dynamic arrays: the formula sits in the top-left cell and its results spill over the range they fill.',
     'The potentials come from the potential table in use: the built-in table unless the workbook holds its own (see the task pane). Every row of that table names its source; CELLWRIGHT.SOURCE shows it.',
     'Regenerate this file with: npm run demo',
   ],

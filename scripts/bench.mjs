@@ -605,7 +605,8 @@ function sizes() {
     const raw = readFileSync(p);
     const gz = zlib.gzipSync(raw, { level: 9 }).length;
     results.push({ name: `size ${f}`, bytes: raw.length, gzipBytes: gz });
-    const target = f === 'functions.js' ? `  target < 60 KB: ${gz < 60 * 1024 ? 'met' : 'MISSED'}` : '';
+    const limit = f === 'functions.js' ? 60 : 120; // KB gzipped: the pane's script, E–pH view included, within 120
+    const target = `  target < ${limit} KB: ${gz < limit * 1024 ? 'met' : 'MISSED'}`;
     // decimal.js announces its errors as "[DecimalError]": that text is in any bundle that holds it
     const decimal = raw.includes('[DecimalError]') ? 'decimal.js bundled' : 'no decimal.js';
     console.log(`${'size'.padEnd(18)} ${f}: ${(raw.length / 1024).toFixed(1)} KB, gzipped ${(gz / 1024).toFixed(1)} KB, ${decimal}${target}`);

@@ -7,12 +7,15 @@
 // Builds dist/ first when it is missing or older than the sources (unless --no-build).
 // Exits 1 when a formula gives an error the scenario does not expect.
 import { mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { register } from 'node:module';
+import { pathToFileURL } from 'node:url';
 import { dirname, relative, resolve } from 'node:path';
 import ExcelJS from 'exceljs';
 import { ensureBuilt, loadBundle, ROOT } from './lib/bundle.mjs';
 import { isErrorValue, parseAddress, address } from './lib/formula.mjs';
 import { errorsOf, evaluateSheet, layoutSheet } from './lib/workbook.mjs';
 import { pinnedTableWorkbook } from './lib/demotable.mjs';
+import { APPLICATION, toSavedForm } from './lib/saved-form.mjs';
 import { scenario } from '../demo/scenario.mjs';
 
 const started = process.hrtime.bigint();
@@ -168,9 +171,41 @@ function cached(v) {
   return v;
 }
 
-function writeSheet(wb, laid, ev) {
+const WIDTHS = [58, 16, 16, 30, 18, 20, 16];
+const LINE_PT = 15;
+
+/** Lines a wrapped text takes in a column of the given width (Excel character units). */
+function linesFor(text, width) {
+  let n = 0;
+  for (const para of String(text).split('\n')) n += Math.max(1, Math.ceil((para.length * 1.1) / Math.max(1, width - 1)));
+  return n;
+}
+
+/** Page layout shared by every sheet: its own page width, print titles, header and footer. */
+function setupPrint(ws, { landscape, titleRows, header, footer }) {
+  ws.pageSetup = {
+    paperSize: 9, // A4
+    orientation: landscape ? 'landscape' : 'portrait',
+    fitToPage: true, // the flag that makes fitToWidth / fitToHeight apply
+    fitToWidth: 1,
+    fitToHeight: 2, // shrinks a long sheet to two pages at most; a short one stays at one
+    horizontalCentered: false,
+    margins: { left: 0.5, right: 0.5, top: 0.75, bottom: 0.75, header: 0.3, footer: 0.3 },
+    printTitlesRow: titleRows,
+  };
+  ws.headerFooter = { oddHeader: header, oddFooter: footer };
+}
+
+function writeSheet(wb, laid, ev, print) {
   const ws = wb.addWorksheet(laid.sheet.name, { views: [{ showGridLines: true }] });
-  ws.columns = [{ width: 58 }, { width: 16 }, { width: 16 }, { width: 30 }, { width: 18 }, { width: 20 }, { width: 16 }];
+  let lastCol = 4;
+  for (const cell of laid.cells.values()) lastCol = Math.max(lastCol, cell.c);
+  for (const [a, sp] of ev.spills) lastCol = Math.max(lastCol, parseAddress(a).c + sp.cols - 1);
+  ws.columns = WIDTHS.map((width) => ({ width }));
+  const used = WIDTHS.slice(0, lastCol).reduce((x, y) => x + y, 0);
+  setupPrint(ws, { landscape: used > 110, titleRows: '1:1', ...print });
+  const heights = new Map(); // row → lines
+  const need = (r, lines) => heights.set(r, Math.max(heights.get(r) ?? 1, lines));
   for (const cell of laid.cells.values()) {
     const x = ws.getCell(cell.addr);
     if (cell.formula) {
@@ -201,12 +236,23 @@ function writeSheet(wb, laid, ev) {
         x.font = { bold: true, size: 14 };
         break;
       case 'intro':
-      case 'text':
+      case 'text': {
         x.font = { italic: true, color: { argb: 'FF444444' } };
+        // a line of explanation spans the printed width and wraps there
+        ws.mergeCells(cell.r, 1, cell.r, lastCol);
+        x.alignment = { wrapText: true, vertical: 'top' };
+        need(cell.r, linesFor(cell.value, used));
+        break;
+      }
+      case 'label':
+        x.alignment = { wrapText: true, vertical: 'top' };
+        need(cell.r, linesFor(cell.value, WIDTHS[0]));
         break;
       case 'section':
         x.font = { bold: true };
         x.fill = FILL.section;
+        x.alignment = { wrapText: true, vertical: 'top' };
+        need(cell.r, linesFor(cell.value, laid.cells.has(address(cell.r, 2)) ? WIDTHS[0] : used));
         break;
       case 'header':
         x.font = { bold: true };
@@ -221,22 +267,44 @@ function writeSheet(wb, laid, ev) {
       }
       case 'note':
         x.font = { color: { argb: 'FF555555' } };
+        x.alignment = { wrapText: true, vertical: 'top' };
+        need(cell.r, linesFor(cell.value, WIDTHS[cell.c - 1]));
+        break;
+      case 'header':
         break;
       default:
     }
+    if (cell.role === 'header') {
+      x.alignment = { wrapText: true, vertical: 'bottom' };
+      need(cell.r, linesFor(cell.value, WIDTHS[cell.c - 1] ?? 16));
+    }
+  }
+  for (const [r, lines] of heights) {
+    if (lines <= 1) continue;
+    const row = ws.getRow(r);
+    row.height = lines * LINE_PT;
+    // label, value, unit and note of a tall row start on the same printed line
+    row.eachCell((c) => {
+      c.alignment = { ...(c.alignment ?? {}), vertical: 'top' };
+    });
   }
   return ws;
 }
 
-function writeCover(wb, bundleInfo) {
+function writeCover(wb, bundleInfo, print) {
   const ws = wb.addWorksheet('Cover');
-  ws.columns = [{ width: 130 }];
+  const COVER = 80;
+  ws.columns = [{ width: COVER }];
+  setupPrint(ws, { landscape: false, titleRows: undefined, ...print });
   let r = 1;
   const line = (text, style = {}) => {
-    const c = ws.getCell(r++, 1);
+    const row = r++;
+    const c = ws.getCell(row, 1);
     c.value = text;
     c.alignment = { wrapText: true, vertical: 'top' };
     Object.assign(c, style);
+    const size = style.font?.size ?? 11;
+    ws.getRow(row).height = linesFor(text, (COVER * 11) / size) * Math.max(LINE_PT, size * 1.35);
   };
   const heading = (text) => {
     r++;
@@ -251,7 +319,7 @@ function writeCover(wb, bundleInfo) {
   heading('How to use this workbook');
   for (const p of scenario.howToUse) line(p);
   heading('Cautions');
-  for (const p of scenario.cautions) line(p, { font: { color: { argb: 'FF8A1C1C' } } });
+  for (const p of scenario.cautions) line(p, { font: { bold: true, color: { argb: 'FF7A1010' } } });
   heading('Provenance');
   line(`Values computed by the Cellwright ${bundleInfo.version} functions bundle (${bundleInfo.count} worksheet functions) with the built-in potential table, by "npm run demo".`);
   return ws;
@@ -260,6 +328,14 @@ function writeCover(wb, bundleInfo) {
 /* ---------------------------------------------------------------------------------------- */
 /* Main                                                                                      */
 /* ---------------------------------------------------------------------------------------- */
+
+/** The checksum of the built-in potential table, as the pane and TABLEINFO report it. */
+async function builtinTableChecksum() {
+  register('./lib/ts-hooks.mjs', import.meta.url);
+  const src = (p) => import(pathToFileURL(resolve(ROOT, p)).href);
+  const [{ builtinChecksum }, { builtinTable }, { recordsOf }] = await Promise.all([src('src/store/stored.ts'), src('src/table/builtin.ts'), src('src/store/rows.ts')]);
+  return builtinChecksum(recordsOf(builtinTable()));
+}
 
 async function main() {
   const buildNote = argv.includes('--no-build') ? 'dist/ was used as it is (--no-build).' : ensureBuilt({ quiet: QUIET });
@@ -275,8 +351,15 @@ async function main() {
   out(dim('Every name in this scenario is invented; inputs are invented, results come from the bundle.'));
 
   const wb = new ExcelJS.Workbook();
-  wb.creator = 'Cellwright demo';
-  writeCover(wb, { version, count: bundle.metadata.functions.length });
+  wb.creator = APPLICATION;
+  wb.lastModifiedBy = APPLICATION;
+  const checksum = await builtinTableChecksum();
+  const amp = (s) => s.replace(/&/g, '&&');
+  const print = {
+    header: `&L&B&9${amp(scenario.title)}&R&9&A`,
+    footer: `&L&7Potential table: built-in, checksum ${checksum}&R&8Page &P of &N`,
+  };
+  writeCover(wb, { version, count: bundle.metadata.functions.length }, print);
 
   let formulas = 0;
   let spilled = 0;
@@ -290,11 +373,14 @@ async function main() {
     for (const f of ev.formulas) for (const m of f.formula.matchAll(/CELLWRIGHT\.([A-Z0-9]+)\(/g)) used.add(m[1]);
     for (const e of errorsOf(laid, ev)) if (!e.expected) unexpected.push({ sheet: sheet.name, ...e });
     printSheet(laid, ev);
-    writeSheet(wb, laid, ev);
+    writeSheet(wb, laid, ev, print);
   }
 
   mkdirSync(dirname(OUT), { recursive: true });
-  writeFileSync(OUT, await pinned.attach(await wb.xlsx.writeBuffer()));
+  // exceljs writes legacy array formulas and plain namespace names; rewrite to the saved form,
+  // then add the web-extension part that carries the pinned table
+  const saved = await toSavedForm(await wb.xlsx.writeBuffer());
+  writeFileSync(OUT, await pinned.attach(saved.bytes));
   const seconds = Number(process.hrtime.bigint() - afterBuild) / 1e9;
   const ids = bundle.metadata.functions.map((f) => f.id);
   const unused = ids.filter((id) => !used.has(id));

@@ -18,8 +18,11 @@ import { renderList, focusRowButton } from './lists';
 import { checkElsewhere } from './notices';
 import { builtin, model, CHECK_EVERY_MS, KINDS, ui } from './state';
 import { pollWhileVisible } from './visiblePolling';
+import { renderEph, wireEph } from './eph';
+import { buildTable } from '../src/table/table';
+import type { PotentialTable } from '../src/table/types';
 
-export const TABS = ['couples', 'electrodes', 'files', 'about'] as const;
+export const TABS = ['couples', 'electrodes', 'files', 'eph', 'about'] as const;
 
 export function selectTab(name: (typeof TABS)[number], focus: boolean): void {
   for (const t of TABS) {
@@ -60,6 +63,7 @@ export function renderAll(): void {
   const cls = el?.classList[0] ?? '';
   renderInUse();
   for (const kind of KINDS) renderList(kind);
+  renderEph();
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {
@@ -68,12 +72,22 @@ export function renderAll(): void {
   }
 }
 
+let ephCache: { records: unknown; table: PotentialTable } | null = null;
+/** The table in use for the E–pH view; undefined when the workbook's table cannot be read. */
+function ephTable(): PotentialTable | undefined {
+  if (!ui.ready || model.state.kind === 'unreadable') return undefined;
+  const records = model.records;
+  if (ephCache?.records !== records) ephCache = { records, table: buildTable(builtin.version, records.couples, records.electrodes).table };
+  return ephCache.table;
+}
+
 export function start(): void {
   replace(byId('about-version'), builtin.version);
   replace(byId('about-source'), BUILTIN_TABLE_SOURCE || 'see the source on each row.');
   wireTabs();
   wireEditors();
   wireFiles();
+  wireEph(ephTable);
   if (typeof Office === 'undefined' || typeof Office.onReady !== 'function') {
     replace(byId('in-use-body'), h('p', {}, 'Office is not available here: open Cellwright from Excel.'));
     byId('app').setAttribute('aria-busy', 'false');

@@ -263,7 +263,8 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
     ws.eachRow({ includeEmpty: false }, (row, r) => {
       row.eachCell({ includeEmpty: false }, (cell, c) => {
         const v = cell.value;
-        values.set(key(ws.name, r, c), plain(v));
+        // a formula's cached result through cell.result: cell.value leaves out a cached 0
+        values.set(key(ws.name, r, c), cell.type === ExcelJS.ValueType.Formula ? plain(cell.result) : plain(v));
         if (cell.type !== ExcelJS.ValueType.Formula) return;
         let text = cell.formula;
         if (typeof text !== 'string' || text === '') {

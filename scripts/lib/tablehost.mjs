@@ -19,6 +19,8 @@ function hostFor(stored) {
           const has = key === TABLE_SETTING_KEY && stored !== null && stored !== undefined;
           return { load() {}, isNullObject: !has, value: has ? stored : null, delete() {} };
         },
+        // the start-up recalculation records the table it computed with (cellwright.computedWith)
+        add() {},
         onSettingsChanged: { add() {} },
       },
       application: { calculate() {} },

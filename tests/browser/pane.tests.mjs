@@ -550,7 +550,7 @@ export const tests = [
       assert.ok(li.includes(`Source: ${source}`) && li.includes(`Note: ${note}`), li);
       const injected = await page.evaluate(() => ({
         pwned: window.__pwned ?? null,
-        elements: document.querySelectorAll('main img, main script, main svg, main b').length,
+        elements: document.querySelectorAll('main img, main script, main svg:not(.eph-svg), main b').length,
       }));
       assert.deepEqual(injected, { pwned: null, elements: 0 });
       await shot(page, '12-hostile-text-shown-as-text', '#list-couple');
@@ -792,6 +792,78 @@ export const tests = [
       const total = px.reduce((a, b) => a + b, 0);
       await page.setContent(`<style>body{font:10px Calibri,Arial,sans-serif;margin:8px}table{border-collapse:collapse;table-layout:fixed;width:${total}px}td{border:1px solid #d0d0d0;padding:1px 3px;vertical-align:top;white-space:nowrap;overflow:hidden}td.wrap{white-space:normal}td.pass{background:#e3f1e3;font-weight:bold}td.fail{background:#f6d5d5;font-weight:bold}</style><table><colgroup>${widths}</colgroup>${body}</table>`);
       await shot(page, '17-verification-sheet-calculated');
+    },
+  },
+  {
+    name: 'E–pH: three couples at 25 °C and 80 °C, readout equals HALFCELL, flat beside sloped, written to a sheet with a chart',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#tab-eph');
+      await page.waitForSelector('#eph-figure svg');
+      const paths = await page.locator('#eph-figure svg path').evaluateAll((ps) => ps.map((p) => p.getAttribute('data-couple')));
+      assert.deepEqual(paths, ['O2/H2O', 'H+/H2', 'Cu2+/Cu', 'Fe3+/Fe2+', 'O2/OH-']);
+      const labels = await page.locator('#eph-figure svg .eph-label').evaluateAll((ts) => ts.map((t) => t.textContent));
+      assert.deepEqual(labels, ['O₂ evolution', 'H₂ evolution', 'Cu2+/Cu', 'Fe3+/Fe2+', 'O2/OH-']);
+      // the readout at pH 7 equals the worksheet function with the same arguments
+      const read = async (key) => Number(/: (-?\d+\.\d+) V/.exec(await page.locator(`#eph-readout li[data-couple="${key}"]`).innerText())[1]);
+      const cu25 = await page.evaluate(() => window.__stubWorkbook.call('HALFCELL', [['Cu2+/Cu']], [[1e-6]], [[1]], [[7]], [[25]]));
+      assert.equal(await read('Cu2+/Cu'), Number(cu25.toFixed(4)));
+      const o2 = await page.evaluate(() => window.__stubWorkbook.call('HALFCELL', [['O2/H2O']], [[1]], [[1]], [[7]], [[25]]));
+      assert.equal(await read('O2/H2O'), Number(o2.toFixed(4)));
+      await fitsWidth(page);
+      await shot(page, '20-eph-three-couples-25C', '#eph-figure');
+      await page.fill('#eph-temperature', '80');
+      await page.dispatchEvent('#eph-temperature', 'change');
+      await page.waitForFunction(() => /80 °C/.test(document.querySelector('#eph-figure svg title')?.textContent ?? ''));
+      const cu80 = await page.evaluate(() => window.__stubWorkbook.call('HALFCELL', [['Cu2+/Cu']], [[1e-6]], [[1]], [[7]], [[80]]));
+      assert.equal(await read('Cu2+/Cu'), Number(cu80.toFixed(4)));
+      assert.notEqual(cu80, cu25);
+      await shot(page, '21-eph-three-couples-80C', '#eph-figure');
+      // a flat couple (Cu2+/Cu) beside a sloped one (MnO4-/Mn2+) at 25 °C
+      await page.fill('#eph-temperature', '25');
+      await page.dispatchEvent('#eph-temperature', 'change');
+      for (const k of ['Fe3+/Fe2+', 'O2/OH-']) await page.locator(`#eph-couples input[value="${k}"]`).uncheck();
+      await page.locator('#eph-couples input[value="MnO4-/Mn2+"]').check();
+      const rows = await page.locator('#eph-table tbody tr').evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent)));
+      assert.equal(rows.length, 29);
+      assert.equal(rows[0][1], rows[28][1]); // Cu2+/Cu: the same at pH 0 and 14
+      assert.ok(Number(rows[0][2]) - Number(rows[28][2]) > 1.2); // MnO4-/Mn2+ falls 8/5 × 0.059 V per pH
+      await shot(page, '22-eph-flat-beside-sloped', '#eph-figure');
+      await page.click('#eph-write');
+      await page.waitForFunction(() => /Wrote/.test(document.getElementById('eph-status')?.textContent ?? ''));
+      const sheet = (await page.evaluate(() => window.__stubWorkbook.file())).sheets['E-pH'];
+      assert.equal(sheet.charts.length, 1);
+      assert.deepEqual(sheet.charts[0], { type: 'XYScatterLines', source: 'A1:E30', seriesBy: 'Columns', title: 'E–pH at 25 °C, dissolved species at activity 0.000001, gases at 1 bar' });
+      const w = sheet.writes[0];
+      assert.equal(w.address, 'A1:E30');
+      assert.equal(w.values[1][1], '=CELLWRIGHT.HALFCELL("Cu2+/Cu",0.000001,1,A2,25)');
+      assert.equal(w.formulas, 4 * 29);
+    },
+  },
+
+  {
+    name: 'E–pH: keyboard only, and an unreadable table says why and draws nothing',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.focus('#tab-couples');
+      for (let i = 0; i < 3; i++) await page.keyboard.press('ArrowRight');
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'tab-eph');
+      await page.waitForSelector('#eph-figure svg');
+      await page.focus('#eph-ph');
+      await page.keyboard.press('ArrowRight');
+      await page.keyboard.press('ArrowRight');
+      await page.waitForFunction(() => /At pH 8:/.test(document.getElementById('eph-readout')?.textContent ?? ''));
+      const x = await page.locator('#eph-figure svg .eph-cursor').getAttribute('x1');
+      assert.equal(Number(x), Number((56 + (8 / 14) * (560 - 56 - 112)).toFixed(1)));
+      await shot(page, '23-eph-keyboard-readout-pH8', '#eph-ph');
+      const raw = '{"format":"cellwright.potential-table","schema":2';
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, raw]);
+      await reopen(page);
+      await page.click('#tab-eph');
+      assert.match(await text(page, '#eph-why'), /cannot be read/);
+      assert.equal(await page.locator('#eph-figure svg').count(), 0);
+      assert.equal(await page.isDisabled('#eph-write'), true);
+      await shot(page, '24-eph-unreadable-table', '#eph-figure');
     },
   },
 ];

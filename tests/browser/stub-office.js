@@ -136,6 +136,18 @@
           });
           return layout;
         })(),
+        charts: {
+          // charts.add(type, sourceRange, seriesBy) → a chart whose title.text is recorded at sync
+          add: function (type, source, seriesBy) {
+            var chart = { title: {} };
+            queue.push(function () {
+              var sheet = file.sheets[name];
+              sheet.charts = sheet.charts || [];
+              sheet.charts.push({ type: type, source: source.address, seriesBy: seriesBy, title: chart.title.text });
+            });
+            return chart;
+          },
+        },
         activate: function () {
           queue.push(function () {
             Object.keys(file.sheets).forEach(function (n) {
@@ -239,6 +251,8 @@
 
   window.Excel = {
     CalculationType: { recalculate: 'Recalculate', full: 'Full', fullRebuild: 'FullRebuild' },
+    ChartType: { xyscatterLines: 'XYScatterLines' },
+    ChartSeriesBy: { auto: 'Auto', columns: 'Columns', rows: 'Rows' },
     run: function (callback) {
       file.runs = (file.runs || 0) + 1;
       return Promise.resolve().then(function () {

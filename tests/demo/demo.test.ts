@@ -15,6 +15,7 @@ import type { Scalar, Value } from '../../scripts/lib/formula.mjs';
 import { loadBundleWithTable } from '../../scripts/lib/tablehost.mjs';
 import { TABLE_SETTING_KEY, readSetting } from '../../scripts/lib/webextension.mjs';
 import { layoutSheet } from '../../scripts/lib/workbook.mjs';
+import { fromSavedFormula } from '../../scripts/lib/saved-form.mjs';
 import { loadBundle, type LoadedBundle } from '../bundle/harness';
 
 const ROOT = resolve(__dirname, '../..');
@@ -49,6 +50,8 @@ function formulaCells(ws: ExcelJS.Worksheet): FormulaCell[] {
     row.eachCell((cell) => {
       const v = cell.value as { formula?: string; shareType?: string; ref?: string } | null;
       if (!v || typeof v !== 'object' || typeof v.formula !== 'string') return;
+      // the file holds the saved form (_xldudf_CELLWRIGHT_X); compare as typed (CELLWRIGHT.X)
+      const formula = fromSavedFormula(v.formula);
       if (v.shareType === 'array' && v.ref) {
         const [a, b] = v.ref.split(':').map(parseAddress);
         const block: Scalar[][] = [];
@@ -57,9 +60,9 @@ function formulaCells(ws: ExcelJS.Worksheet): FormulaCell[] {
           for (let c = a.c; c <= b.c; c++) line.push(stored(ws.getCell(r, c)));
           block.push(line);
         }
-        out.push({ sheet: ws.name, addr: cell.address, formula: v.formula, ref: v.ref, cached: block });
+        out.push({ sheet: ws.name, addr: cell.address, formula, ref: v.ref, cached: block });
       } else {
-        out.push({ sheet: ws.name, addr: cell.address, formula: v.formula, cached: stored(cell) });
+        out.push({ sheet: ws.name, addr: cell.address, formula, cached: stored(cell) });
       }
     }),
   );
