@@ -11,7 +11,7 @@ import { register } from 'node:module';
 import { pathToFileURL } from 'node:url';
 import { dirname, relative, resolve } from 'node:path';
 import ExcelJS from 'exceljs';
-import { ensureBuilt, loadBundle, ROOT } from './lib/bundle.mjs';
+import { ensureBuilt, ROOT } from './lib/bundle.mjs';
 import { isErrorValue, parseAddress, address } from './lib/formula.mjs';
 import { errorsOf, evaluateSheet, layoutSheet } from './lib/workbook.mjs';
 import { pinnedTableWorkbook } from './lib/demotable.mjs';
@@ -269,8 +269,6 @@ function writeSheet(wb, laid, ev, print) {
         x.font = { color: { argb: 'FF555555' } };
         x.alignment = { wrapText: true, vertical: 'top' };
         need(cell.r, linesFor(cell.value, WIDTHS[cell.c - 1]));
-        break;
-      case 'header':
         break;
       default:
     }

@@ -55,7 +55,7 @@ export function formulaArg(a: unknown): string {
   if (typeof a === 'number') return String(a).replace('e', 'E');
   if (typeof a === 'boolean') return a ? 'TRUE' : 'FALSE';
   if (Array.isArray(a)) return `{${(a as unknown[][]).map((row) => row.map(formulaArg).join(',')).join(';')}}`;
-  return String(a);
+  return JSON.stringify(a) ?? '';
 }
 
 /** The formula of a case, e.g. =CELLWRIGHT.NERNST(0.3419,2,100). Trailing omitted arguments are left out. */
@@ -153,7 +153,7 @@ export async function writeVerificationSheet(now: Date = new Date(), names: Read
       if (WRAPPED.includes(i)) col.format.wrapText = true;
     });
     // printing: landscape, one page wide, the case header repeated on every page (ExcelApi 1.9)
-    sheet.pageLayout.orientation = 'Landscape' as Excel.PageOrientation;
+    sheet.pageLayout.orientation = 'Landscape';
     sheet.pageLayout.zoom = { horizontalFitToPages: 1, verticalFitToPages: 0 };
     sheet.pageLayout.setPrintTitleRows(`$${content.firstCaseRow - 1}:$${content.firstCaseRow - 1}`);
     sheet.activate();

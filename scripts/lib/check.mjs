@@ -206,7 +206,7 @@ async function tableFor(buffer, { tableCsv, tableCsvName }) {
     if (status.state !== 'workbook') throw new UnreadableError(`the table file ${tableCsvName ?? ''} cannot be used: ${status.reason}`);
     return { bundle, table: { origin: 'file', file: tableCsvName ?? null, ...tableFacts(status), note: `the table of ${tableCsvName ?? 'the given file'} (--table), not the workbook's` } };
   }
-  let addinId = null;
+  let addinId;
   try {
     addinId = manifestIdentity(readFileSync(resolve(ROOT, 'manifest.xml'), 'utf8')).id;
   } catch {

@@ -8,7 +8,7 @@
  * See also: splitSpecies
  */
 export function asciiFormula(text: string): string {
-  if (/^[\x00-\x7f·•]*$/.test(text)) return text;
+  if (plainAscii(text)) return text;
   let out = '';
   for (const ch of text) out += ASCII_OF.get(ch) ?? ch;
   return out;
@@ -28,3 +28,12 @@ for (const [c, a] of [
   ['₍', '('],
   ['₎', ')'],
 ]) ASCII_OF.set(c, a);
+
+/** True when every character is ASCII, "·" or "•" (nothing to rewrite). */
+function plainAscii(text: string): boolean {
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c > 0x7f && c !== 0xb7 && c !== 0x2022) return false;
+  }
+  return true;
+}

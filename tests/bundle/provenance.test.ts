@@ -60,7 +60,7 @@ describe('TABLEINFO with a workbook table (the channel the pane and the start-up
   afterEach(() => {
     useStoredValue(null);
   });
-  const f = (field: string): unknown => one(TABLEINFO(field) as unknown[][]);
+  const f = (field: string): unknown => one(TABLEINFO(field));
 
   it('a pinned built-in table: origin "pinned built-in", its revision and change time as an Excel serial', () => {
     const text = writeStoredText({ ...pinnedCopy(builtin), revision: 1, changedAt: '2026-03-04T12:00:00.000Z' });

@@ -196,13 +196,13 @@ describe('cellwright check on a workbook written for the test', () => {
     inputs.getCell('B3').value = 3;
     wb.definedNames.add("'Inputs'!$B$1:$B$3", 'steps');
     const calc = wb.addWorksheet('Calc');
-    calc.getCell('A1').value = { formula: 'CELLWRIGHT.NERNST(Inputs!A1,2,Inputs!A2)', result: nernst } as ExcelJS.CellFormulaValue;
-    calc.getCell('A2').value = { formula: '_xldudf_CELLWRIGHT_NERNST(Inputs!A1,2,Inputs!A2)', result: nernst } as ExcelJS.CellFormulaValue;
-    calc.getCell('A3').value = { formula: 'ROUND(A1*1000,1)&" mV"', result: `${Math.round(nernst * 10000) / 10} mV` } as ExcelJS.CellFormulaValue;
-    calc.getCell('A4').value = { formula: 'SUM(steps)', result: 6 } as ExcelJS.CellFormulaValue;
-    calc.getCell('A5').value = { formula: 'IFERROR(CELLWRIGHT.STDPOTENTIAL("Xx9/Yy"),"none")', result: 'none' } as ExcelJS.CellFormulaValue;
-    calc.getCell('A6').value = { formula: '_xlfn.XLOOKUP(2,Inputs!B1:B3,Inputs!B1:B3)', result: 2 } as ExcelJS.CellFormulaValue;
-    calc.getCell('A7').value = { formula: 'A6*2', result: 4 } as ExcelJS.CellFormulaValue;
+    calc.getCell('A1').value = { formula: 'CELLWRIGHT.NERNST(Inputs!A1,2,Inputs!A2)', result: nernst };
+    calc.getCell('A2').value = { formula: '_xldudf_CELLWRIGHT_NERNST(Inputs!A1,2,Inputs!A2)', result: nernst };
+    calc.getCell('A3').value = { formula: 'ROUND(A1*1000,1)&" mV"', result: `${Math.round(nernst * 10000) / 10} mV` };
+    calc.getCell('A4').value = { formula: 'SUM(steps)', result: 6 };
+    calc.getCell('A5').value = { formula: 'IFERROR(CELLWRIGHT.STDPOTENTIAL("Xx9/Yy"),"none")', result: 'none' };
+    calc.getCell('A6').value = { formula: '_xlfn.XLOOKUP(2,Inputs!B1:B3,Inputs!B1:B3)', result: 2 };
+    calc.getCell('A7').value = { formula: 'A6*2', result: 4 };
     const file = join(dir, 'forms.xlsx');
     writeFileSync(file, Buffer.from(await wb.xlsx.writeBuffer()));
 

@@ -29,8 +29,8 @@ let bundle: LoadedBundle;
 function stored(cell: ExcelJS.Cell): Scalar {
   let v = cell.value as unknown;
   // cell.result, not cell.value.result: the reader leaves a cached 0 out of cell.value (it is in the file as <v>0</v>)
-  if (v !== null && typeof v === 'object' && 'formula' in (v as object)) v = (cell as unknown as { result?: unknown }).result ?? null;
-  if (v !== null && typeof v === 'object' && 'error' in (v as object)) return { code: String((v as { error: unknown }).error) };
+  if (v !== null && typeof v === 'object' && 'formula' in (v)) v = (cell as unknown as { result?: unknown }).result ?? null;
+  if (v !== null && typeof v === 'object' && 'error' in (v)) return { code: String((v).error) };
   if (v === undefined) return null;
   return v as Scalar;
 }

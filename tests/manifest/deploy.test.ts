@@ -20,7 +20,7 @@ const require = createRequire(import.meta.url);
 const { DEV_BASE, OFFICE_JS_CDN, deployBase } = require('../../scripts/lib/deployBase.cjs') as {
   DEV_BASE: string;
   OFFICE_JS_CDN: string;
-  deployBase(value: string | undefined): string;
+  deployBase: (value: string | undefined) => string;
 };
 const ROOT = resolve(__dirname, '../..');
 const BASE = 'https://addins.quorvane.example/tools/cellwright/';

@@ -22,7 +22,7 @@ describe(`dist/functions.json against the published custom-functions schema (@mi
   it('negative controls: a two-character id, a name starting with a digit, an http help URL, a non-boolean flag and an unknown dimensionality fail', () => {
     const broken = (change: (f: Record<string, unknown>) => void) => {
       const m = metadata();
-      change(m.functions[0] as unknown as Record<string, unknown>);
+      change(m.functions[0]);
       expect(validate(m)).toBe(false);
       return (validate.errors ?? []).map((e) => `${e.instancePath} ${e.message}`).join('\n');
     };

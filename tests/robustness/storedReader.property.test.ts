@@ -56,7 +56,10 @@ function placesOf(doc: unknown): Array<Array<string | number>> {
   const walk = (x: unknown, path: Array<string | number>, depth: number): void => {
     if (depth > 4) return;
     if (Array.isArray(x)) x.forEach((v, i) => (out.push([...path, i]), walk(v, [...path, i], depth + 1)));
-    else if (typeof x === 'object' && x !== null) for (const k of Object.keys(x)) out.push([...path, k]), walk((x as Record<string, unknown>)[k], [...path, k], depth + 1);
+    else if (typeof x === 'object' && x !== null) for (const k of Object.keys(x)) {
+      out.push([...path, k]);
+      walk((x as Record<string, unknown>)[k], [...path, k], depth + 1);
+    }
   };
   walk(doc, [], 0);
   return out;
@@ -147,7 +150,7 @@ describe('through the functions channel: such a value makes table look-ups answe
   beforeAll(async () => {
     g.CustomFunctions = customFunctionsGlobal;
     const wh = await import('../../functions/workbookHost');
-    host = wh.installFunctionsHost() as never;
+    host = wh.installFunctionsHost();
     STDPOTENTIAL = (await import('../../functions/families/table')).STDPOTENTIAL as never;
   });
   afterAll(() => {
@@ -164,7 +167,7 @@ describe('through the functions channel: such a value makes table look-ups answe
       try {
         st = host.useStoredValue(v);
       } catch (e) {
-        throw new Error(`the channel threw ${String(e).slice(0, 200)} for ${brief(v)}`);
+        expect.fail(`the channel threw ${String(e).slice(0, 200)} for ${brief(v)}`);
       }
       expect(['workbook', 'unreadable']).toContain(st.state);
       const cell = ((STDPOTENTIAL([['Cu2+/Cu']], null) as unknown[][])[0][0]);

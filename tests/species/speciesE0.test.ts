@@ -28,7 +28,7 @@ describe('data/species.json', () => {
       for (const k of ['dfH_kJ_mol', 'dfG_kJ_mol', 'S_J_mol_K', 'Cp_J_mol_K']) {
         if (k in r) expect(Number.isFinite(r[k])).toBe(true);
       }
-      const key = `${r.formula}|${r.state}`;
+      const key = `${String(r.formula)}|${String(r.state)}`;
       expect(seen.has(key)).toBe(false);
       seen.add(key);
     }

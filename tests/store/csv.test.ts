@@ -114,13 +114,24 @@ function spreadsheetCells(text: string): string[] {
     for (let i = 0; i < line.length; i++) {
       const c = line[i];
       if (quoted) {
-        if (c === '"' && line[i + 1] === '"') (cell += '"'), i++;
+        if (c === '"' && line[i + 1] === '"') {
+          cell += '"';
+          i++;
+        }
         else if (c === '"') quoted = false;
         else cell += c;
-      } else if (c === '"' && start) (quoted = true), (start = false);
-      else if (c === ',' || c === ';' || c === '\t') cells.push(cell), (cell = ''), (start = true);
-      else if (c === ' ' && start) cell += c;
-      else (cell += c), (start = false);
+      } else if (c === '"' && start) {
+        quoted = true;
+        start = false;
+      } else if (c === ',' || c === ';' || c === '\t') {
+        cells.push(cell);
+        cell = '';
+        start = true;
+      } else if (c === ' ' && start) cell += c;
+      else {
+        cell += c;
+        start = false;
+      }
     }
     cells.push(cell);
   }

@@ -159,7 +159,7 @@ describe('stored table: damage is found, never papered over', () => {
 });
 
 describe('stored table: basedOn, changedAt and revision are checked strictly', () => {
-  const doc = () => JSON.parse(written(pinnedCopy(B), 3));
+  const doc = () => JSON.parse(written(pinnedCopy(B), 3)) as Parameters<typeof contentChecksum>[0] & Record<string, unknown>;
   const withField = (field: string, value: unknown, recompute = true) => {
     const d = doc();
     d[field] = value;

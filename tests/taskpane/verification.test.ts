@@ -27,7 +27,7 @@ describe('verification sheet content', () => {
     sheet.values.forEach((row, i) =>
       row.forEach((v, j) => {
         if (v === '') return;
-        ws.getCell(i + 1, j + 1).value = typeof v === 'string' && v.startsWith('=') && sheet.formats[i][j] !== '@' ? ({ formula: v.slice(1) } as ExcelJS.CellFormulaValue) : v;
+        ws.getCell(i + 1, j + 1).value = typeof v === 'string' && v.startsWith('=') && sheet.formats[i][j] !== '@' ? ({ formula: v.slice(1) }) : v;
       }),
     );
     const report = await checkWorkbook(Buffer.from(await wb.xlsx.writeBuffer()), { collect: true });
@@ -50,7 +50,7 @@ describe('verification sheet content', () => {
     sheet.values.forEach((row, i) =>
       row.forEach((v, j) => {
         if (v === '') return;
-        ws.getCell(i + 1, j + 1).value = typeof v === 'string' && v.startsWith('=') && sheet.formats[i][j] !== '@' ? ({ formula: v.slice(1) } as ExcelJS.CellFormulaValue) : v;
+        ws.getCell(i + 1, j + 1).value = typeof v === 'string' && v.startsWith('=') && sheet.formats[i][j] !== '@' ? ({ formula: v.slice(1) }) : v;
       }),
     );
     const report = await checkWorkbook(Buffer.from(await wb.xlsx.writeBuffer()), { collect: true });
