@@ -177,6 +177,10 @@ export const scenario = {
         { label: 'A key that is not in the table (the error a typo gives)', formula: '=CELLWRIGHT.STDPOTENTIAL("Cu3+/Cu")', expect: '#N/A' },
         { label: 'Potential table these results come from', formula: '=CELLWRIGHT.TABLEINFO("origin")', note: 'pinned to the workbook, so add-in updates do not change these results' },
         { label: 'Its checksum (compare with the task pane or another workbook)', formula: '=CELLWRIGHT.TABLEINFO("checksum")' },
+        { section: 'Cathode powder for the pilot cell line: incoming check (invented lot)' },
+        { key: 'lfpTheory', label: 'Theoretical capacity of LiFePO4, one lithium per formula unit', formula: '=CELLWRIGHT.SPECIFICCAPACITY("LiFePO4",1)', unit: 'mA·h/g', digits: 1 },
+        { key: 'lfpMeasured', label: 'First-discharge capacity, lot PX-14 (invented)', value: 158, unit: 'mA·h/g' },
+        { label: 'Share of the theoretical capacity reached', formula: '={lfpMeasured}/{lfpTheory}', unit: 'fraction', digits: 3 },
       ],
     },
 

@@ -119,6 +119,18 @@ function specificenergy(cell_voltage_V: any[][], species: any[][], n: any[][], e
 }
 
 /**
+ * Theoretical specific charge capacity of an electrode material, n·F/(3.6·M), in mA·h per g of the formula given (graphite's 372 mA·h/g is per g of C6).
+ * @customfunction SPECIFICCAPACITY
+ * @helpurl https://localhost:3000/docs/functions.html#specificcapacity
+ * @param species Formula of the material such as "LiFePO4" or "C6", or a molar mass in g/mol.
+ * @param n Electrons (or lithium ions) exchanged per formula unit (a whole number ≥ 1).
+ * @returns mA·h/g.
+ */
+function specificcapacity(species: any[][], n: any[][]): any[][] {
+  return F.SPECIFICCAPACITY(species, n) as any;
+}
+
+/**
  * Volume of gas evolved by a current (ideal gas, dry basis unless saturated is TRUE), in L.
  * @customfunction GASVOLUME
  * @helpurl https://localhost:3000/docs/functions.html#gasvolume

@@ -7,6 +7,7 @@ import { gasVolume } from '../../src/faraday/gasVolume';
 import { molarMass } from '../../src/faraday/molarMass';
 import { plateThickness } from '../../src/faraday/plateThickness';
 import { plateTime } from '../../src/faraday/plateTime';
+import { specificCapacity } from '../../src/faraday/specificCapacity';
 import { specificEnergy } from '../../src/faraday/specificEnergy';
 import { STANDARD_PRESSURE_BAR } from '../../src/constants';
 import { type ArgSpec, domains, worksheet } from '../adapter';
@@ -131,6 +132,18 @@ export const SPECIFICENERGY = worksheet({
   result: 'kWh/kg.',
   helpAnchor: 'specificenergy',
   compute: specificEnergy,
+});
+
+export const SPECIFICCAPACITY = worksheet({
+  id: 'SPECIFICCAPACITY',
+  description: 'Theoretical specific charge capacity of an electrode material, n·F/(3.6·M), in mA·h per g of the formula given (graphite\'s 372 mA·h/g is per g of C6).',
+  args: [
+    { ...species, help: 'Formula of the material such as "LiFePO4" or "C6", or a molar mass in g/mol.' },
+    { ...electrons, help: 'Electrons (or lithium ions) exchanged per formula unit (a whole number ≥ 1).' },
+  ],
+  result: 'mA·h/g.',
+  helpAnchor: 'specificcapacity',
+  compute: specificCapacity,
 });
 
 export const GASVOLUME = worksheet({

@@ -11,7 +11,7 @@ const { bundle, run } = bundleUnderTest();
 describe('metadata', () => {
   it('declares the family with its argument names', () => {
     const byId = new Map(bundle().metadata.functions.map((f) => [f.id, f]));
-    for (const id of ['MOLARMASS', 'ECEQUIV', 'DEPOSITMASS', 'DEPOSITTIME', 'PLATETHICKNESS', 'PLATETIME', 'CURRENTEFFICIENCY', 'SPECIFICENERGY', 'GASVOLUME']) expect(byId.has(id), id).toBe(true);
+    for (const id of ['MOLARMASS', 'ECEQUIV', 'DEPOSITMASS', 'DEPOSITTIME', 'PLATETHICKNESS', 'PLATETIME', 'CURRENTEFFICIENCY', 'SPECIFICENERGY', 'SPECIFICCAPACITY', 'GASVOLUME']) expect(byId.has(id), id).toBe(true);
     const names = (id: string) => byId.get(id)!.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(', ');
     expect(names('PLATETHICKNESS')).toBe('current_density_A_dm2, time_min, species, n, density_g_cm3, [efficiency]');
     expect(names('GASVOLUME')).toBe('current_A, time_h, n, [efficiency], [temperature_C], [pressure_bar], [saturated]');
@@ -56,5 +56,18 @@ describe("Faraday's law", () => {
     expect(one(await run('SPECIFICENERGY', 4.2, 'Al', 3, 0.95))).toBeCloseTo(13.17, 2); // Hall–Héroult 13–14 kWh/kg, common practice
     expect(one(await run('GASVOLUME', 1, 1, 2, 1, 0, 1.01325))).toBeCloseTo(0.418, 3); // 0.418 L H2 per A·h at 0 °C, 1 atm (CODATA molar volume)
     expect(one(await run('GASVOLUME', 1, 1, 2, null, null, null))).toBeCloseTo((0.418148 * 298.15) / 273.15 * 1.01325, 5); // 25 °C, 1 bar defaults
+  });
+});
+
+describe('SPECIFICCAPACITY', () => {
+  it('a scalar, a column of materials, an omitted argument and an error cell', async () => {
+    // LiFePO4 170 mA·h/g, graphite 372 mA·h/g per g of C6 (theoretical capacities, common practice)
+    expect(one(await run('SPECIFICCAPACITY', 'LiFePO4', 1))).toBeCloseTo(169.9, 1);
+    const col = (await run('SPECIFICCAPACITY', [['LiFePO4'], ['C6']], 1)) as number[][];
+    expect(col[0][0]).toBeCloseTo(169.9, 1);
+    expect(col[1][0]).toBeCloseTo(372, 0);
+    expect(isError(one(await run('SPECIFICCAPACITY', 'LiFePO4', null)), '#VALUE!')).toBe(true); // n is required
+    expect(isError(one(await run('SPECIFICCAPACITY', 'LiFePO4', 0)), '#NUM!')).toBe(true);
+    expect(isError(one(await run('SPECIFICCAPACITY', 'Xq', 1)), '#N/A')).toBe(true);
   });
 });
