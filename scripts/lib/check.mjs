@@ -458,7 +458,7 @@ export async function checkWorkbook(buffer, { tolerance = 1e-9, tableCsv = null,
       if (!agrees(stored, got, tolerance)) bad.push({ address: f.address, stored, recomputed: got });
     }
     if (bad.length === 0) agree++;
-    else for (const b of bad) differing.push({ ...where, formula: `=${f.typed}`, address: b.address, anchor: f.address, stored: b.stored, recomputed: b.recomputed });
+    else for (const b of bad) differing.push({ ...where, address: b.address, anchor: f.address, stored: b.stored, recomputed: b.recomputed });
   }
   const differingFormulas = new Set(differing.map((d) => `${d.sheet}!${d.anchor}`)).size;
   // collect: the recomputed value of every formula cell (spilled cells included), for callers that show them
