@@ -170,7 +170,7 @@ export const tests = [
       await shot(page, '01-built-in-table-in-use');
       await page.click('#tab-about');
       const about = await text(page, '#panel-about');
-      for (const needle of [/hydrogen/, /chlorine/, /hydrogen cyanide/, /Cyanide baths/, /chromium\(VI\)/, /Cathodic protection/, /responsibility of the qualified engineer/, /Local codes, standards, regulations and licensed professional practice/, /CRC Handbook/]) {
+      for (const needle of [/hydrogen/, /chlorine/, /hydrogen cyanide/, /Cyanide baths/, /chromium\(VI\)/, /Cathodic protection/, /responsibility of the qualified engineer/, /Local codes, standards, regulations and licensed professional practice/, /Thermoddem/]) {
         assert.match(about, needle);
       }
       await fitsWidth(page);
@@ -312,7 +312,7 @@ export const tests = [
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
       assert.equal(await cellE0(page, 'Ag+/Ag'), 0.8);
       await row(page, 'couple', 'Ag+/Ag').getByRole('button', { name: 'Revert Ag+/Ag to the built-in value' }).click();
-      assert.match(await text(page, '#confirm'), /E° 0\.8 → 0\.7996 V/);
+      assert.match(await text(page, '#confirm'), /E° 0\.8 → 0\.7992 V/);
       await confirmDialog(page, true);
       await waitIdle(page);
       assert.equal(await cellE0(page, 'Ag+/Ag'), builtinE0('Ag+/Ag'));
@@ -365,7 +365,7 @@ export const tests = [
       assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3377); // pinned values, not the add-in's
       const newer = await text(page, '#newer-builtin');
       assert.match(newer, new RegExp(`built-in table ${BUILTIN_VERSION} is newer than 2025\\.1`));
-      assert.match(newer, /Updating would change 1 row: couple Cu2\+\/Cu: E° 0\.3377 → 0\.3419 V/);
+      assert.match(newer, /Updating would change 1 row: couple Cu2\+\/Cu: E° 0\.3377 → 0\.3372 V/);
       await fitsWidth(page);
       await shot(page, '08-newer-built-in-table');
       await page.click('#update-builtin');
@@ -461,7 +461,7 @@ export const tests = [
       assert.ok(keys.length >= 3 && keys.length < couplesFile.couples.length, `${keys.length} rows for "fe"`);
       for (const li of await page.locator('#list-couple > li').allInnerTexts()) assert.match(li.toLowerCase(), /fe/);
       assert.match(await text(page, '#count-couple'), new RegExp(`^${keys.length} of ${couplesFile.couples.length + 1} couples match\\.`));
-      await page.fill('#filter-couple', 'CRC');
+      await page.fill('#filter-couple', 'Thermoddem');
       assert.ok((await page.locator('#list-couple > li').count()) > 10); // matches sources too
       await page.fill('#filter-couple', '');
       await page.check('#only-diff-couple');
@@ -620,7 +620,7 @@ export const tests = [
       const page = await openPane(open);
       await page.click('#pin');
       await waitIdle(page);
-      const raw = (await stored(page)).replace(/"e0":0\.3419/, '"e0":1e999');
+      const raw = (await stored(page)).replace(/"e0":0\.3372/, '"e0":1e999');
       await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, raw]);
       await reopen(page);
       const card = await text(page, '#in-use');
@@ -676,7 +676,7 @@ export const tests = [
       await waitIdle(page);
       const msg = await notice(page);
       assert.match(msg, /Not saved: this workbook’s table was changed elsewhere/);
-      assert.match(msg, /couple Ag\+\/Ag: E° 0\.7996 → 0\.81 V, source/);
+      assert.match(msg, /couple Ag\+\/Ag: E° 0\.7992 → 0\.81 V, source/);
       assert.match(await text(page, '#f-couple-form-error'), /Save again/);
       assert.equal(JSON.parse(await stored(page)).revision, 2);
       await fitsWidth(page);
