@@ -106,10 +106,12 @@ describe('cellwright check on the demo workbook', () => {
     expect(r.status).toBe(1);
     const rep = r.report!;
     expect(rep.differing).toHaveLength(1);
-    expect(rep.differing[0]).toMatchObject({ sheet: 'Bath chemistry', address: 'B13', formula: '=CELLWRIGHT.ACTIVITYCOEF(2,B12)', stored: 0.5 });
+    // the demo stores the add-in's calls in Excel's saved form (_xldudf_CELLWRIGHT_ACTIVITYCOEF)
+    expect(rep.differing[0]).toMatchObject({ sheet: 'Bath chemistry', address: 'B13', stored: 0.5 });
+    expect(rep.differing[0].formula).toMatch(/ACTIVITYCOEF\(2,B12\)$/);
     expect(rep.differing[0].recomputed as number).toBeCloseTo(0.3834, 3);
     const text = check(bad);
-    expect(text.stdout).toMatch(/Bath chemistry!B13 {2}=CELLWRIGHT\.ACTIVITYCOEF\(2,B12\)\n\s+stored 0\.5, recomputed 0\.38/);
+    expect(text.stdout).toMatch(/Bath chemistry!B13 {2}=\S*ACTIVITYCOEF\(2,B12\)\n\s+stored 0\.5, recomputed 0\.38/);
   });
 
   it('a copy whose stored table was edited (checksum recomputed) fails on the cells that depend on the edited couple', async () => {
