@@ -25,7 +25,7 @@ const SHEETS = ['Cover', ...scenario.sheets.map((s) => s.name)];
 let dir: string;
 let zip: JSZip;
 let sheetXml: string[];
-const text = async (p: string) => (await zip.file(p)!.async('string')) as string;
+const text = async (p: string) => await zip.file(p)!.async('string');
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'cellwright-print-'));
