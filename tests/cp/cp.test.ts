@@ -45,7 +45,7 @@ describe('protectionCriterion: criteria as the standards state them, per electro
     expect(r.kind).toBe('shift');
   });
   it('the most negative potential in seawater', () => {
-    expect(protectionCriterion('Ag/AgCl/seawater', 'limit').value).toBe(-1.1); // ISO 15589-2 §5.2 (as transcribed)
+    expect(protectionCriterion('Ag/AgCl/seawater', 'limit').value).toBe(-1.1); // ISO 15589-2 §5.2 (as copied in a secondary source)
   });
   it('conditions whose value was not read, and other electrodes, answer not-found with where to look', () => {
     expect(() => protectionCriterion('CSE', 'SRB')).toThrow(/sulfate-reducing/);
@@ -117,7 +117,7 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(anodeCount(31, 2, null, null)).toBe(16);
     expect(anodeCount(30, 2, 1216.67, 50)).toBe(25);
   });
-  it('anode data table (DNV-RP-B401 Table 10-6 as transcribed; Roberge 2008 p. 555)', () => {
+  it('anode data table (DNV-RP-B401 Table 10-6 as copied in a secondary source; Roberge 2008 p. 555)', () => {
     expect(anodeData('Al-Zn-In', 'capacity')).toBe(2000);
     expect(anodeData('Al-Zn-In/seawater', 'potential')).toBe(-1.05);
     expect(anodeData('zinc', 'capacity')).toBe(780);
