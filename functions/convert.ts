@@ -163,10 +163,6 @@ function memoLookUp<Row>(
   return hit;
 }
 
-/** A hint that says what to write (a reversed couple, a missing filling); near matches are left to unknownKeyMessage. */
-function specificHint(hint: string): string {
-  return hint.startsWith('nearest keys') ? '' : hint;
-}
 
 /** "unknown couple "X"; …" with a key that exists in this table, or a near match of what was typed. */
 function unknownKeyMessage(what: 'couple' | 'reference electrode', where: string, key: string, table: PotentialTable): string {
@@ -182,7 +178,7 @@ function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
     key,
     (t, k) => t.findCouple(k),
     (k, t) => {
-      const h = specificHint(coupleKeyHint(t, k));
+      const h = coupleKeyHint(t, k, false);
       return notAvailable(h ? `unknown couple ${show(k)}; ${h}` : unknownKeyMessage('couple', 'the potential table', k, t));
     },
   );
@@ -194,7 +190,7 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
     key,
     (t, k) => t.findElectrode(k),
     (k, t) => {
-      const h = specificHint(electrodeKeyHint(t, k));
+      const h = electrodeKeyHint(t, k, false);
       return notAvailable(h ? `unknown reference electrode ${show(k)}; ${h}` : unknownKeyMessage('reference electrode', 'the electrode table', k, t));
     },
   );

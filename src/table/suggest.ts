@@ -11,16 +11,19 @@ import type { PotentialTable } from './types';
  * is a couple of the table written Red/Ox, else the nearest keys of the table ("nearest keys: …"),
  * or "" when nothing is close.
  *
- * Syntax: coupleKeyHint(table, key)
+ * withNearest false leaves out the edit-distance search (the cell messages make their own near match).
+ *
+ * Syntax: coupleKeyHint(table, key, [withNearest])
  * Example: coupleKeyHint(builtinTable(), "Zn/Zn2+") → "write Ox/Red: Zn2+/Zn"
  * See also: electrodeKeyHint, normalizeCoupleKey
  */
-export function coupleKeyHint(table: PotentialTable, key: string): string {
+export function coupleKeyHint(table: PotentialTable, key: string, withNearest = true): string {
   const sides = splitCoupleKey(asciiFormula(key));
   if (sides !== undefined) {
     const reversed = table.findCouple(`${sides.red}/${sides.ox}`);
     if (reversed !== undefined) return `write Ox/Red: ${reversed.key}`;
   }
+  if (!withNearest) return '';
   const near = nearest(normalizeCoupleKey(key).toLowerCase(), table.couples.map((c) => ({ key: c.key, forms: [normalizeCoupleKey(c.key).toLowerCase()] })));
   return near.length > 0 ? `nearest keys: ${near.map((k) => `"${k}"`).join(', ')}` : '';
 }
@@ -30,17 +33,18 @@ export function coupleKeyHint(table: PotentialTable, key: string): string {
  * its filling ("Ag/AgCl", "SSC", "silver chloride") lists the fillings of the table; "NHE" (the
  * normal hydrogen electrode, an obsolete name) points to "SHE"; otherwise the nearest keys or aliases.
  *
- * Syntax: electrodeKeyHint(table, key)
+ * Syntax: electrodeKeyHint(table, key, [withNearest])
  * Example: electrodeKeyHint(builtinTable(), "SSC") → 'Ag/AgCl needs its filling: "Ag/AgCl/KCl(sat)", …'
  * See also: coupleKeyHint, normalizeElectrodeKey
  */
-export function electrodeKeyHint(table: PotentialTable, key: string): string {
+export function electrodeKeyHint(table: PotentialTable, key: string, withNearest = true): string {
   const k = normalizeElectrodeKey(key);
   if (k === 'nhe' || k === 'normalhydrogenelectrode') return 'for the hydrogen scale write "SHE" (standard hydrogen electrode; "NHE" is an obsolete name)';
   if (/^(ssc|ag\/agcl|agcl|silverchloride|silver\/silverchloride|ag\/agcl\/kcl)$/.test(k)) {
     const fillings = table.electrodes.filter((e) => normalizeElectrodeKey(e.key).startsWith('ag/agcl')).map((e) => `"${e.key}"`);
     if (fillings.length > 0) return `Ag/AgCl needs its filling: ${fillings.join(', ')}`;
   }
+  if (!withNearest) return '';
   const near = nearest(
     k,
     table.electrodes.map((e) => ({ key: e.key, forms: [e.key, ...e.aliases].map(normalizeElectrodeKey) })),
