@@ -7,10 +7,11 @@
  * Excel-specific happens behind this module, in these parts:
  *
  *  - excelErrors.ts  error values and messages: NotFoundError → #N/A + message, InputError →
- *                    #VALUE! + message, DomainError or a non-finite result → #NUM! (no message);
+ *                    #VALUE! + message, DomainError or a non-finite result → #NUM! (no message; only for results
+ *                    that cannot be represented);
  *                    an error value in an input cell is passed through in that element only
  *                    (#REF! and #NAME?, which Excel does not accept as results, become #VALUE!);
- *  - domains.ts      domains of numbers, each one record of bounds and words (→ #NUM! outside);
+ *  - domains.ts      domains of numbers, each one record of bounds and words (→ #VALUE! naming the range outside);
  *  - convert.ts      reading one element: numbers, numeric text, text, booleans, null (omitted or
  *                    empty: the default), couple and electrode keys (memoized per table);
  *  - lists.ts        whole-range arguments, read whole and paired by position;

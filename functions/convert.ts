@@ -12,7 +12,7 @@ import { coupleKeyHint, electrodeKeyHint } from '../src/table/suggest';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
 import { currentTable } from './context';
 import { type Domain, domains } from './domains';
-import { asResultError, invalidNumber, invalidValue, isErrorValue, notAvailable, toExcelError } from './excelErrors';
+import { asResultError, invalidValue, isErrorValue, notAvailable, toExcelError } from './excelErrors';
 import type { ArgSpec, ArgValue } from './spec';
 
 /** A converter: the converted value, or an Excel error value. */
@@ -55,10 +55,21 @@ export function numberFrom(raw: unknown, spec: ArgSpec, domain: Domain | undefin
   } else if (isErrorValue(raw)) return asResultError(raw, spec.name);
   else if (isBlank(raw)) return invalidValue(`${spec.name} is required; the cell is empty`);
   else return invalidValue(`${spec.name} must be a number; got ${show(raw)}`);
-  if (!Number.isFinite(x)) return invalidNumber();
+  if (!Number.isFinite(x)) return invalidValue(`${spec.name} must be ${domain?.accepts ?? 'a number'}; got ${show(raw)}`);
   if (x === 0) x = 0; // −0 → 0
-  if (domain !== undefined && !domain.test(x)) return invalidNumber();
+  if (domain !== undefined && !domain.test(x)) return outOfDomain(spec.name, domain, x);
   return x;
+}
+
+/**
+ * #VALUE! for a number the argument does not accept: the user must change it, so the message names
+ * the argument, what it accepts and what it got, and a likely slip (a percentage typed for a
+ * fraction).
+ */
+function outOfDomain(name: string, domain: Domain, x: number): CustomFunctions.Error {
+  const b = domain.bounds;
+  const percent = b !== undefined && b.hi === 1 && x > 1 && x <= 100 ? `; a percentage? write ${x} % as ${x / 100}` : '';
+  return invalidValue(`${name} must be ${domain.accepts}; got ${x}${percent}`);
 }
 
 export function textFrom(raw: unknown, spec: ArgSpec): string | CustomFunctions.Error {

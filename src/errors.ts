@@ -4,8 +4,10 @@
  *
  * - NotFoundError  → #N/A with its message (unknown couple, electrode, species, model, element,
  *                    or a table that cannot be used)
- * - InputError     → #VALUE! with its message (text that cannot be read as what was expected)
- * - DomainError    → #NUM! (a number outside the function's domain, or a result outside double range)
+ * - InputError     → #VALUE! with its message (text that cannot be read as what was expected, or a
+ *                    number the user must change: outside a model's or the data's stated range)
+ * - DomainError    → #NUM!, which Excel shows without a message: only for a result that cannot be
+ *                    represented (outside double range)
  */
 export class CellwrightError extends Error {
   constructor(message: string) {
@@ -27,7 +29,7 @@ export class NotFoundError extends CellwrightError {}
 /** Text or a value that cannot be read as the expected type (→ #VALUE! with message). */
 export class InputError extends CellwrightError {}
 
-/** A number outside the domain, or a result outside double range (→ #NUM!). */
+/** A result that cannot be represented, such as one outside double range (→ #NUM!, no message). */
 export class DomainError extends CellwrightError {}
 
 /** Throws DomainError unless x is a finite number; returns x. */

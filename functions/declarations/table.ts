@@ -5,7 +5,7 @@
 import * as F from '../families/table';
 
 /**
- * Standard potential of a couple, in V vs SHE at the same temperature. Away from 25 °C the table's E° moves by the species data (NBS 1982, ΔrH, ΔrS, ΔrCp) where they cover every species, else by the row's dE°/dT (E0BASIS says which). #N/A when neither covers the couple and T ≠ 25 °C; #NUM! outside 0…100 °C.
+ * Standard potential of a couple, in V vs SHE at the same temperature. Away from 25 °C the table's E° moves by the species data (NBS 1982, ΔrH, ΔrS, ΔrCp) where they cover every species, else by the row's dE°/dT (E0BASIS says which). #N/A when neither covers the couple and T ≠ 25 °C; #VALUE! naming the range outside 0…100 °C.
  * @customfunction STDPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#stdpotential
  * @param couple Key of the potential table, written Ox/Red (e.g. "Cu2+/Cu", "O2/H2O").

@@ -10,7 +10,7 @@ import { currentTable } from '../context';
 
 export const STDPOTENTIAL = worksheet({
   id: 'STDPOTENTIAL',
-  description: 'Standard potential of a couple, in V vs SHE at the same temperature. Away from 25 °C the table\'s E° moves by the species data (NBS 1982, ΔrH, ΔrS, ΔrCp) where they cover every species, else by the row\'s dE°/dT (E0BASIS says which). #N/A when neither covers the couple and T ≠ 25 °C; #NUM! outside 0…100 °C.',
+  description: 'Standard potential of a couple, in V vs SHE at the same temperature. Away from 25 °C the table\'s E° moves by the species data (NBS 1982, ΔrH, ΔrS, ΔrCp) where they cover every species, else by the row\'s dE°/dT (E0BASIS says which). #N/A when neither covers the couple and T ≠ 25 °C; #VALUE! naming the range outside 0…100 °C.',
   args: [
     { ...couple(), help: 'Key of the potential table, written Ox/Red (e.g. "Cu2+/Cu", "O2/H2O").' },
     { ...temperatureC, help: 'Temperature in °C, 0 to 100 (default 25).' },

@@ -1,5 +1,5 @@
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
-import { DomainError } from '../errors';
+import { InputError } from '../errors';
 import type { CoupleRow } from '../table/types';
 import { cellElectrons } from './cellElectrons';
 import { e0AtTemperature } from './e0AtTemperature';
@@ -14,10 +14,10 @@ import { emf } from './emf';
  * Example: cellPotential(copper, zinc, 0.01, 25) → 1.1037 + 0.0592 = 1.1629 V
  * See also: emf, cellElectrons, cellReaction, nernst
  *
- * @throws DomainError when Q ≤ 0 or T is outside 0…100 °C
+ * @throws InputError when Q ≤ 0 or T is outside 0…100 °C
  */
 export function cellPotential(cathode: CoupleRow, anode: CoupleRow, q: number, temperatureC: number): number {
-  if (!(q > 0) || !Number.isFinite(q)) throw new DomainError('the reaction quotient must be a finite number > 0');
+  if (!(q > 0) || !Number.isFinite(q)) throw new InputError(`the reaction quotient Q must be a finite number > 0; got ${q}`);
   const n = cellElectrons(cathode.parsed, anode.parsed);
   const e = emf(e0AtTemperature(cathode, temperatureC), e0AtTemperature(anode, temperatureC));
   return e - ((GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC)) / (n * FARADAY_C_PER_MOL)) * Math.log(q);

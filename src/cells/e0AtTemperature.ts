@@ -1,5 +1,5 @@
 import type { HalfReaction } from '../chem/halfReaction';
-import { DomainError, NotFoundError } from '../errors';
+import { InputError, NotFoundError } from '../errors';
 import { speciesE0 } from '../species/speciesE0';
 import type { CoupleRow } from '../table/types';
 
@@ -43,12 +43,12 @@ function speciesShift(hr: HalfReaction, temperatureC: number): number | null {
  *
  * @param row a couple row (key, e0 in V, dEdT_mV_K when stored, the parsed half-reaction)
  * @param temperatureC temperature, °C
- * @throws DomainError outside 0…100 °C
+ * @throws InputError outside 0…100 °C
  * @throws NotFoundError when T ≠ 25 °C and neither species data nor a dE°/dT covers the couple
  */
 export function e0AtTemperature(row: E0Source, temperatureC: number): number {
   if (!(temperatureC >= E0_TEMPERATURE_RANGE_C.min && temperatureC <= E0_TEMPERATURE_RANGE_C.max)) {
-    throw new DomainError(`E° can be moved to ${E0_TEMPERATURE_RANGE_C.min}…${E0_TEMPERATURE_RANGE_C.max} °C only`);
+    throw new InputError(`temperature ${temperatureC} °C is outside the range of the temperature rules: E° can be moved to ${E0_TEMPERATURE_RANGE_C.min}…${E0_TEMPERATURE_RANGE_C.max} °C only`);
   }
   if (temperatureC === 25) return row.e0;
   if (row.parsed !== undefined) {

@@ -14,7 +14,7 @@
  * Atoms of every element and charge (electrons included) must balance; the errors say what does
  * not ("O: 4 on the left, 3 on the right").
  */
-import { DomainError, InputError } from '../errors';
+import { InputError } from '../errors';
 import { MAX_FORMULA_CHARS } from '../textLimits';
 import { type Phase, type Species, canonicalSpecies, chargeSuffix, parseSpecies, splitSpecies } from './formula';
 
@@ -455,7 +455,7 @@ export function lnReactionQuotient(hr: HalfReaction, activity: (term: HalfReacti
   for (const t of hr.species) {
     const a = activity(t);
     if (!(a > 0) || !Number.isFinite(a)) {
-      throw new DomainError(`the activity of ${displaySpecies(t.species, t.phase)} must be a finite number > 0; got ${a}`);
+      throw new InputError(`the activity of ${displaySpecies(t.species, t.phase)} must be a finite number > 0; got ${a}`);
     }
     const term = t.coefficient * Math.log(a);
     lnQ += t.side === 'red' ? term : -term;

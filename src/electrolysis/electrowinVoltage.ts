@@ -1,5 +1,5 @@
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
-import { DomainError, NotFoundError } from '../errors';
+import { InputError, NotFoundError } from '../errors';
 import { standardDecompositionVoltage } from './standardDecompositionVoltage';
 
 /**
@@ -11,7 +11,7 @@ import { standardDecompositionVoltage } from './standardDecompositionVoltage';
  * See also: standardDecompositionVoltage, thermoneutralVoltage, waterSplitVoltage
  *
  * @throws NotFoundError for "H2O" (use waterSplitVoltage) or an unknown metal
- * @throws DomainError for an activity or pressure ≤ 0, or a water activity > 1
+ * @throws InputError for an activity or pressure ≤ 0, or a water activity > 1
  */
 export function electrowinVoltage(
   metal: string,
@@ -24,8 +24,8 @@ export function electrowinVoltage(
   if (/^\s*(h2o|water)\s*$/i.test(String(metal))) {
     throw new NotFoundError('for water electrolysis use WATERSPLITVOLTAGE; ELECTROWINVOLTAGE takes Zn, Cu or Ni');
   }
-  if (!(metalActivity > 0) || !(hydrogenIonActivity > 0) || !(oxygenBar > 0)) throw new DomainError('activities and pressures must be > 0');
-  if (!(waterActivity > 0 && waterActivity <= 1)) throw new DomainError('water_activity must be in (0, 1]');
+  if (!(metalActivity > 0) || !(hydrogenIonActivity > 0) || !(oxygenBar > 0)) throw new InputError('metal_activity, acid_activity and oxygen_bar must be > 0');
+  if (!(waterActivity > 0 && waterActivity <= 1)) throw new InputError(`water_activity must be in (0, 1]; got ${waterActivity}`);
   const u0 = standardDecompositionVoltage(metal, temperatureC);
   const rt2f = (GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC)) / (2 * FARADAY_C_PER_MOL);
   return u0 + rt2f * (0.5 * Math.log(oxygenBar) + 2 * Math.log(hydrogenIonActivity) - Math.log(metalActivity) - Math.log(waterActivity));

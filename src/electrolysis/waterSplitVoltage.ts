@@ -1,5 +1,5 @@
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
-import { DomainError } from '../errors';
+import { InputError } from '../errors';
 import { standardDecompositionVoltage } from './standardDecompositionVoltage';
 
 /**
@@ -12,11 +12,11 @@ import { standardDecompositionVoltage } from './standardDecompositionVoltage';
  * Example: waterSplitVoltage(80, 30, 0.7) → 1.2427 V
  * See also: standardDecompositionVoltage, thermoneutralVoltage
  *
- * @throws DomainError for a pressure or water activity ≤ 0 or a water activity > 1
+ * @throws InputError for a pressure or water activity ≤ 0 or a water activity > 1
  */
 export function waterSplitVoltage(temperatureC: number, pressureBar: number, waterActivity: number): number {
-  if (!(pressureBar > 0)) throw new DomainError('pressure_bar must be > 0');
-  if (!(waterActivity > 0 && waterActivity <= 1)) throw new DomainError('water_activity must be in (0, 1]');
+  if (!(pressureBar > 0)) throw new InputError(`pressure_bar must be > 0; got ${pressureBar}`);
+  if (!(waterActivity > 0 && waterActivity <= 1)) throw new InputError(`water_activity must be in (0, 1]; got ${waterActivity}`);
   const u0 = standardDecompositionVoltage('H2O', temperatureC);
   const rt2f = (GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC)) / (2 * FARADAY_C_PER_MOL);
   return u0 + rt2f * (1.5 * Math.log(pressureBar) - Math.log(waterActivity));

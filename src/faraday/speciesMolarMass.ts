@@ -1,6 +1,6 @@
 import { asciiFormula } from '../chem/asciiFormula';
 import { isElementSymbol } from '../chem/elements';
-import { DomainError, InputError } from '../errors';
+import { InputError } from '../errors';
 import { molarMass } from './molarMass';
 
 /**
@@ -18,7 +18,7 @@ import { molarMass } from './molarMass';
  */
 export function speciesMolarMass(species: string | number): number {
   if (typeof species === 'number') {
-    if (!(species > 0) || !Number.isFinite(species)) throw new DomainError('a molar mass must be a finite number > 0');
+    if (!(species > 0) || !Number.isFinite(species)) throw new InputError(`a molar mass must be a finite number > 0 g/mol; got ${species}`);
     return species;
   }
   const meant = miscapitalisedElement(species);

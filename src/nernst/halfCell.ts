@@ -1,6 +1,6 @@
 import { speciesState } from '../chem/halfReaction';
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, LN10, kelvin } from '../constants';
-import { DomainError } from '../errors';
+import { InputError } from '../errors';
 import { e0AtTemperature } from '../cells/e0AtTemperature';
 import type { CoupleRow } from '../table/types';
 import { speciesPKw } from '../species/speciesPKw';
@@ -24,7 +24,7 @@ import { speciesPKw } from '../species/speciesPKw';
  * @param redActivity activity of the reduced-side species (> 0), 1 when null
  * @param pH pH, or null for unit H+ and OH- activities
  * @param temperatureC temperature, °C (0…100)
- * @throws DomainError for activities ≤ 0 or T outside 0…100 °C
+ * @throws InputError for activities ≤ 0 or T outside 0…100 °C
  * @throws NotFoundError at T ≠ 25 °C for a couple without dE°/dT
  */
 export function halfCell(
@@ -36,12 +36,12 @@ export function halfCell(
 ): number {
   const aOx = oxActivity ?? 1;
   const aRed = redActivity ?? 1;
-  if (!(aOx > 0) || !(aRed > 0)) throw new DomainError('activities must be > 0');
+  if (!(aOx > 0) || !(aRed > 0)) throw new InputError(`ox_activity and red_activity must be > 0; got ${aOx} and ${aRed}`);
   const plan = planOf(row);
   const e0 = e0AtTemperature(row, temperatureC);
   let lnQ = 0;
   if (pH !== null && pH !== undefined) {
-    if (!Number.isFinite(pH)) throw new DomainError('pH must be a finite number');
+    if (!Number.isFinite(pH)) throw new InputError('pH must be a finite number');
     // ln a_H+ = −pH·ln 10 and ln a_OH- = (pH − pKw)·ln 10 while the activity is a normal double
     // (within ±300 decades); beyond that the activity itself is formed and its logarithm taken,
     // so that an activity that underflows to 0 or overflows is refused, not extrapolated.
@@ -62,7 +62,7 @@ export function halfCell(
 
 /** ln a of an activity that must be a finite number > 0. */
 function lnOfActivity(a: number, what: string): number {
-  if (!(a > 0) || a === Infinity) throw new DomainError(`the activity of ${what} must be a finite number > 0; got ${a}`);
+  if (!(a > 0) || a === Infinity) throw new InputError(`the activity of ${what} must be a finite number > 0; got ${a}`);
   return Math.log(a);
 }
 

@@ -1,7 +1,7 @@
 import { parseSpecies } from '../chem/formula';
 import { lnReactionQuotient } from '../chem/halfReaction';
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
-import { DomainError, InputError, NotFoundError } from '../errors';
+import { InputError, NotFoundError } from '../errors';
 import { e0AtTemperature } from '../cells/e0AtTemperature';
 import type { CoupleRow } from '../table/types';
 
@@ -17,7 +17,7 @@ import type { CoupleRow } from '../table/types';
  *
  * @throws InputError when the lists differ in length or a species is named twice
  * @throws NotFoundError naming a species that is not in the half-reaction (or is not a species at all)
- * @throws DomainError for an activity ≤ 0 or T outside 0…100 °C
+ * @throws InputError for an activity ≤ 0 or T outside 0…100 °C
  */
 export function halfCellBySpecies(row: CoupleRow, species: readonly string[], activities: readonly number[], temperatureC: number): number {
   if (species.length !== activities.length) {
@@ -37,7 +37,7 @@ export function halfCellBySpecies(row: CoupleRow, species: readonly string[], ac
     }
     if (given.has(key)) throw new InputError(`"${name.trim()}" is named twice`);
     const a = activities[i];
-    if (!(a > 0) || !Number.isFinite(a)) throw new DomainError(`the activity of ${name.trim()} must be > 0`);
+    if (!(a > 0) || !Number.isFinite(a)) throw new InputError(`the activity of ${name.trim()} must be > 0; got ${a}`);
     given.set(key, a);
   });
   const e0 = e0AtTemperature(row, temperatureC);

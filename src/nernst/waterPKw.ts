@@ -6,7 +6,7 @@
  */
 import water from '../../data/water.json';
 import { kelvin } from '../constants';
-import { DomainError } from '../errors';
+import { InputError } from '../errors';
 
 const kw = water.ionProduct;
 const rho = water.saturatedLiquidDensity;
@@ -28,11 +28,11 @@ function saturatedDensity_g_cm3(T: number): number {
  * Example: waterPKw(25) → 13.995
  * See also: halfCell
  *
- * @throws DomainError outside 0…350 °C
+ * @throws InputError outside 0…350 °C
  */
 export function waterPKw(temperatureC: number): number {
   if (!(temperatureC >= WATER_PKW_RANGE_C.min && temperatureC <= WATER_PKW_RANGE_C.max)) {
-    throw new DomainError(`the ion product of water is available from ${WATER_PKW_RANGE_C.min} to ${WATER_PKW_RANGE_C.max} °C`);
+    throw new InputError(`temperature ${temperatureC} °C is outside the data's range: the ion product of water is available from ${WATER_PKW_RANGE_C.min} to ${WATER_PKW_RANGE_C.max} °C`);
   }
   const T = kelvin(temperatureC);
   const d = saturatedDensity_g_cm3(T);

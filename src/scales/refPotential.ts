@@ -1,4 +1,4 @@
-import { NotFoundError, DomainError } from '../errors';
+import { InputError, NotFoundError } from '../errors';
 import { kelvin } from '../constants';
 import { speciesE0 } from '../species/speciesE0';
 import type { ElectrodeRow } from '../table/types';
@@ -30,7 +30,7 @@ export const REF_TEMPERATURE_RANGE_C = { min: 0, max: 100 } as const;
 export function refPotential(row: ElectrodeRow, temperatureC: number): number {
   if (temperatureC === 25) return row.potential;
   if (!(temperatureC >= REF_TEMPERATURE_RANGE_C.min && temperatureC <= REF_TEMPERATURE_RANGE_C.max)) {
-    throw new DomainError(`reference potentials are given only within ${REF_TEMPERATURE_RANGE_C.min}…${REF_TEMPERATURE_RANGE_C.max} °C`);
+    throw new InputError(`temperature ${temperatureC} °C is outside the reference electrodes' range: reference potentials are given only within ${REF_TEMPERATURE_RANGE_C.min}…${REF_TEMPERATURE_RANGE_C.max} °C`);
   }
   if (row.dEdT_mV_K !== undefined) return row.potential + (row.dEdT_mV_K / 1000) * (temperatureC - 25);
   const hr = electrodeReaction([row.key, ...row.aliases]);

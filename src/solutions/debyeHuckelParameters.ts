@@ -3,7 +3,7 @@
  */
 import data from '../../data/debye-huckel.json';
 import { AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, ELEMENTARY_CHARGE_C, LN10, kelvin } from '../constants';
-import { DomainError } from '../errors';
+import { InputError } from '../errors';
 
 /** Temperatures at which A and B are available, °C (where the dielectric constant was measured). */
 export const DEBYE_HUCKEL_RANGE_C: { readonly min: number; readonly max: number } = {
@@ -43,7 +43,7 @@ export interface DebyeHuckelParameters {
  * Debye–Hückel parameters of water on the molality scale at a temperature, computed from the
  * dielectric constant (Malmberg & Maryott 1956) and density (Kell 1975) of water:
  * l_B = e²/(4π·ε0·εr·k·T), B = √(8π·N_A·ρw·l_B), A = √(2π·N_A·ρw)·l_B^(3/2)/ln 10.
- * Throws DomainError outside 0…100 °C.
+ * Throws InputError outside 0…100 °C.
  *
  * Syntax: debyeHuckelParameters(temperatureC)
  * Example: debyeHuckelParameters(25) → { A: 0.5108, B: 0.3287, … }
@@ -63,7 +63,7 @@ let lastParameters: DebyeHuckelParameters | null = null;
 
 function computeParameters(temperatureC: number): DebyeHuckelParameters {
   if (!(temperatureC >= DEBYE_HUCKEL_RANGE_C.min && temperatureC <= DEBYE_HUCKEL_RANGE_C.max)) {
-    throw new DomainError(`Debye–Hückel parameters are available from ${DEBYE_HUCKEL_RANGE_C.min} to ${DEBYE_HUCKEL_RANGE_C.max} °C`);
+    throw new InputError(`temperature ${temperatureC} °C is outside the data's range: Debye–Hückel parameters are available from ${DEBYE_HUCKEL_RANGE_C.min} to ${DEBYE_HUCKEL_RANGE_C.max} °C`);
   }
   const epsR = dielectricConstant(temperatureC);
   const rho = waterDensity(temperatureC);

@@ -1,4 +1,4 @@
-import { DomainError, InputError } from '../errors';
+import { InputError } from '../errors';
 
 /**
  * E° of the half-reaction formed by adding half-reactions. Free energies add, potentials do not:
@@ -21,6 +21,6 @@ export function combine(potentials: readonly number[], electrons: readonly numbe
     sumNE += electrons[i] * potentials[i];
     sumN += electrons[i];
   }
-  if (sumN === 0) throw new DomainError('the electrons of the steps add up to 0');
+  if (sumN === 0) throw new InputError('the electrons of the steps add up to 0; the combined step must transfer electrons (a sum ≠ 0)');
   return sumNE / sumN;
 }

@@ -77,7 +77,7 @@ describe('ranges and broadcasting', () => {
   it('a bad element gives an error in that element only', () => {
     const r = b.call('NERNST', 0.5, 1, [[1, -1, 'abc', null, 10]]) as unknown[][];
     expect(r[0][0]).toBe(0.5);
-    expect(isError(r[0][1], '#NUM!')).toBe(true); // Q ≤ 0
+    expect(isError(r[0][1], '#VALUE!')).toBe(true); // Q ≤ 0
     expect(isError(r[0][2], '#VALUE!')).toBe(true);
     expect(isError(r[0][3], '#VALUE!')).toBe(true); // required Q from an empty cell
     expect(r[0][4]).toBeCloseTo(0.5 - 0.0591593, 7);
@@ -90,12 +90,30 @@ describe('ranges and broadcasting', () => {
 });
 
 describe('domain and type errors', () => {
-  it('n must be a whole number ≥ 1 (#NUM!)', () => {
-    expect(isError(one(b.call('NERNSTSLOPE', 1.5)), '#NUM!')).toBe(true);
-    expect(isError(one(b.call('NERNSTSLOPE', 0)), '#NUM!')).toBe(true);
+  it('n must be a whole number ≥ 1 (#VALUE!)', () => {
+    expect(isError(one(b.call('NERNSTSLOPE', 1.5)), '#VALUE!')).toBe(true);
+    expect(isError(one(b.call('NERNSTSLOPE', 0)), '#VALUE!')).toBe(true);
   });
-  it('temperatures at or below absolute zero are #NUM!', () => {
-    expect(isError(one(b.call('NERNSTSLOPE', 1, -273.15)), '#NUM!')).toBe(true);
+  it('temperatures at or below absolute zero are #VALUE!', () => {
+    expect(isError(one(b.call('NERNSTSLOPE', 1, -273.15)), '#VALUE!')).toBe(true);
+  });
+  it('a number the user must change is #VALUE! with a message naming the argument, the accepted range and the value', () => {
+    const msg = (r: unknown): string => {
+      expect(isError(r, '#VALUE!')).toBe(true);
+      return (r as { message: string }).message;
+    };
+    // 95 typed for 95 %: PLATETIME(25 µm, 2 A/dm², Ni, 2, 8.9 g/cm³, 95)
+    expect(msg(one(b.call('PLATETIME', 25, 2, 'Ni', 2, 8.9, 95)))).toBe('efficiency must be a fraction in (0, 1]; got 95; a percentage? write 95 % as 0.95');
+    // n = 2.5
+    expect(msg(one(b.call('NERNSTSLOPE', 2.5)))).toBe('n must be a whole number ≥ 1; got 2.5');
+    // a current density of 0 where it divides (time = ∞)
+    expect(msg(one(b.call('PLATETIME', 25, 0, 'Ni', 2, 8.9)))).toBe('current_density_A_dm2 must be > 0; got 0');
+    // 120 °C where the temperature rules cover 0–100 °C
+    expect(msg(one(b.call('STDPOTENTIAL', 'Cu2+/Cu', 120)))).toMatch(/120 °C is outside .*0…100 °C/);
+    // below absolute zero
+    expect(msg(one(b.call('NERNSTSLOPE', 1, -300)))).toBe('temperature_C must be > −273.15 °C; got -300');
+    // a number too large to be a double, typed as text
+    expect(msg(one(b.call('NERNSTSLOPE', '1e999')))).toMatch(/^n must be a whole number ≥ 1; got "1e999"/);
   });
   it('text where a number belongs is #VALUE! with a message naming the argument', () => {
     const r = one(b.call('DELTAG', 'volts', 2)) as { code: string; message: string };

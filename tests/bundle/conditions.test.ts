@@ -31,7 +31,7 @@ describe('WATERSPLITVOLTAGE', () => {
     expect(r[1][0]).toBeCloseTo(1.18, 2);
     expect(isError(r[2][0], '#VALUE!')).toBe(true);
     expect(String((r[2][0] as { message?: string }).message)).toMatch(/between 0 and 100 °C/);
-    expect(isError(one(await call('WATERSPLITVOLTAGE', 25, 0)), '#NUM!')).toBe(true);
+    expect(isError(one(await call('WATERSPLITVOLTAGE', 25, 0)), '#VALUE!')).toBe(true);
   });
 });
 

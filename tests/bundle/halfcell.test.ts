@@ -27,13 +27,13 @@ describe('HALFCELL', () => {
     expect(r[0][1]).toBe(0.7697);
     expect(r[1][0]).toBeCloseTo(0.7697 - S, 6);
   });
-  it('domain errors are #NUM! in their element only', async () => {
+  it('domain errors are #VALUE! in their element only', async () => {
     const r = await call('HALFCELL', 'Cu2+/Cu', [[0.01, 0, -1, 'x']]);
     expect(r[0][0]).toBeCloseTo(0.3372 - S, 6); // data/couples.json (Thermoddem V1.10)
-    expect(isError(r[0][1], '#NUM!')).toBe(true);
-    expect(isError(r[0][2], '#NUM!')).toBe(true);
+    expect(isError(r[0][1], '#VALUE!')).toBe(true);
+    expect(isError(r[0][2], '#VALUE!')).toBe(true);
     expect(isError(r[0][3], '#VALUE!')).toBe(true);
-    expect(isError(one(await call('HALFCELL', 'Cu2+/Cu', 1, 1, 30)), '#NUM!')).toBe(true); // pH outside −5…20
+    expect(isError(one(await call('HALFCELL', 'Cu2+/Cu', 1, 1, 30)), '#VALUE!')).toBe(true); // pH outside −5…20
   });
   it('an unknown couple is #N/A with a message', async () => {
     const r = one(await call('HALFCELL', 'Cu3+/Cu')) as { code: string; message: string };
@@ -53,11 +53,11 @@ describe('HALFCELLBYSPECIES', () => {
     expect(r[0][0]).toBeCloseTo(0.7697 - S, 6); // E° 0.7697 V, data/couples.json (Thermoddem V1.10)
     expect(r[1][0]).toBeCloseTo(-0.0561 - S / 3, 6); // E° −0.0561 V, data/couples.json (Thermoddem V1.10)
   });
-  it('a species not in the half-reaction is #N/A naming it; unequal lists #VALUE!; activity 0 #NUM!', async () => {
+  it('a species not in the half-reaction is #N/A naming it; unequal lists #VALUE!; activity 0 #VALUE!', async () => {
     const na = one(await call('HALFCELLBYSPECIES', 'Cu2+/Cu', [['Zn2+']], [[1]])) as { code: string; message: string };
     expect(na.code).toBe('#N/A');
     expect(na.message).toMatch(/"Zn2\+" is not in the half-reaction/);
     expect(isError(one(await call('HALFCELLBYSPECIES', 'Cu2+/Cu', [['Cu2+', 'Cu']], [[1]])), '#VALUE!')).toBe(true);
-    expect(isError(one(await call('HALFCELLBYSPECIES', 'Cu2+/Cu', [['Cu2+']], [[0]])), '#NUM!')).toBe(true);
+    expect(isError(one(await call('HALFCELLBYSPECIES', 'Cu2+/Cu', [['Cu2+']], [[0]])), '#VALUE!')).toBe(true);
   });
 });

@@ -21,14 +21,14 @@ describe('reference scales', () => {
     expect(one(await run('REFPOTENTIAL', 'SCE'))).toBe(0.2412); // Bard & Faulkner, inside back cover
     expect(one(await run('REFPOTENTIAL', [[' ag/agcl/kcl (SAT) ']]))).toBe(0.197); // Bard & Faulkner, inside back cover
   });
-  it('REFPOTENTIAL errors: unknown electrode #N/A naming it; no dE/dT nor fixed filling away from 25 °C #N/A; 150 °C #NUM!', async () => {
+  it('REFPOTENTIAL errors: unknown electrode #N/A naming it; no dE/dT nor fixed filling away from 25 °C #N/A; 150 °C #VALUE!', async () => {
     const unknown = one(await run('REFPOTENTIAL', 'Pt/PtO'));
     expect(isError(unknown, '#N/A')).toBe(true);
     expect((unknown as FakeError).message).toMatch(/Pt\/PtO/);
     const noSlope = one(await run('REFPOTENTIAL', 'Ag/AgCl/seawater', 40));
     expect(isError(noSlope, '#N/A')).toBe(true);
     expect((noSlope as FakeError).message).toMatch(/dE\/dT/);
-    expect(isError(one(await run('REFPOTENTIAL', 'SCE', 150)), '#NUM!')).toBe(true);
+    expect(isError(one(await run('REFPOTENTIAL', 'SCE', 150)), '#VALUE!')).toBe(true);
   });
   it('CONVERTPOTENTIAL: the NACE SP0169 criterion −0.85 V vs CSE on the SHE and SCE scales', async () => {
     // NACE SP0169: −850 mV vs CSE; CSE +0.316 V (Szabó & Bakos 2010), SCE +0.2412 V (Bard & Faulkner)

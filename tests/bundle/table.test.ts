@@ -29,13 +29,13 @@ describe('STDPOTENTIAL', () => {
     expect(Math.abs((r[0][1] as number) - (1.2292 - 0.845e-3 * 35))).toBeLessThan(1e-3);
     expect(Math.abs((r[0][2] as number) - (1.2292 - 0.845e-3 * 55))).toBeLessThan(1e-3);
   });
-  it('#N/A with a message when neither species data nor dE°/dT covers the couple; #NUM! outside 0…100 °C', async () => {
+  it('#N/A with a message when neither species data nor dE°/dT covers the couple; #VALUE! outside 0…100 °C', async () => {
     const na = one(await call('STDPOTENTIAL', 'Bi3+/Bi', 40)) as { code: string; message: string };
     expect(na.code).toBe('#N/A');
     expect(na.message).toMatch(/"Bi3\+\/Bi" has neither species data/);
     expect(typeof one(await call('STDPOTENTIAL', 'MnO4-/Mn2+', 40))).toBe('number');
-    expect(isError(one(await call('STDPOTENTIAL', 'Cu2+/Cu', 150)), '#NUM!')).toBe(true);
-    expect(isError(one(await call('STDPOTENTIAL', 'Cu2+/Cu', -300)), '#NUM!')).toBe(true);
+    expect(isError(one(await call('STDPOTENTIAL', 'Cu2+/Cu', 150)), '#VALUE!')).toBe(true);
+    expect(isError(one(await call('STDPOTENTIAL', 'Cu2+/Cu', -300)), '#VALUE!')).toBe(true);
   });
   it('an unknown couple is #N/A with a message naming it; a number is #VALUE!', async () => {
     const r = one(await call('STDPOTENTIAL', 'Unobtainium2+/U')) as { code: string; message: string };

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { cellPotential } from '../../src/cells/cellPotential';
 import { e0AtTemperature } from '../../src/cells/e0AtTemperature';
 import { emf } from '../../src/cells/emf';
-import { DomainError } from '../../src/errors';
+import { InputError } from '../../src/errors';
 import { builtinTable } from '../../src/table/builtin';
 
 const t = builtinTable();
@@ -38,7 +38,7 @@ describe('cellPotential', () => {
   });
 
   it('refuses Q ≤ 0', () => {
-    expect(() => cellPotential(cu, zn, 0, 25)).toThrow(DomainError);
-    expect(() => cellPotential(cu, zn, -1, 25)).toThrow(DomainError);
+    expect(() => cellPotential(cu, zn, 0, 25)).toThrow(InputError);
+    expect(() => cellPotential(cu, zn, -1, 25)).toThrow(InputError);
   });
 });

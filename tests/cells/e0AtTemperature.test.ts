@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { e0AtTemperature } from '../../src/cells/e0AtTemperature';
-import { DomainError, NotFoundError } from '../../src/errors';
+import { InputError, NotFoundError } from '../../src/errors';
 import { builtinTable } from '../../src/table/builtin';
 
 const t = builtinTable();
@@ -64,7 +64,7 @@ describe('e0AtTemperature', () => {
 
   it('refuses temperatures outside 0…100 °C', () => {
     for (const tc of [-0.1, 100.1, -300, Number.NaN]) {
-      expect(() => e0AtTemperature(t.findCouple('Cu2+/Cu')!, tc)).toThrow(DomainError);
+      expect(() => e0AtTemperature(t.findCouple('Cu2+/Cu')!, tc)).toThrow(InputError);
     }
     // Cu2+ has no Cp° in the NBS tables, so ΔrCp = 0: linear in T with slope ΔrS/2F,
     // ΔrS = 33.150 − (−99.6) − 130.684 (NBS 1982); Bratsch's +0.011 mV/K is the same slope to 0.1 µV/K

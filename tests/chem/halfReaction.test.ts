@@ -10,7 +10,7 @@ import {
   speciesState,
 } from '../../src/chem/halfReaction';
 import { parseSpecies } from '../../src/chem/formula';
-import { DomainError, InputError } from '../../src/errors';
+import { InputError } from '../../src/errors';
 
 function coefficients(text: string): Record<string, number> {
   const hr = parseHalfReaction(text);
@@ -227,8 +227,8 @@ describe('reaction quotient', () => {
 
   it('rejects activities ≤ 0', () => {
     const hr = parseHalfReaction('Cu2+ + 2e- -> Cu');
-    expect(() => lnReactionQuotient(hr, () => 0)).toThrow(DomainError);
-    expect(() => lnReactionQuotient(hr, () => -1)).toThrow(DomainError);
+    expect(() => lnReactionQuotient(hr, () => 0)).toThrow(InputError);
+    expect(() => lnReactionQuotient(hr, () => -1)).toThrow(InputError);
   });
 });
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { thermalVoltage } from '../../src/constants';
-import { DomainError } from '../../src/errors';
+import { DomainError, InputError } from '../../src/errors';
 import { butlerVolmer } from '../../src/kinetics/butlerVolmer';
 import { tafelSlope } from '../../src/kinetics/tafelSlope';
 
@@ -29,7 +29,7 @@ describe('butlerVolmer', () => {
   });
   it('αc defaults to 1 − αa; αa ≥ 1 without αc is a domain error', () => {
     expect(butlerVolmer(1, -0.05, 0.3, null, 25)).toBe(butlerVolmer(1, -0.05, 0.3, 0.7, 25));
-    expect(() => butlerVolmer(1, 0.1, 1.5, null, 25)).toThrow(DomainError);
+    expect(() => butlerVolmer(1, 0.1, 1.5, null, 25)).toThrow(InputError);
     expect(butlerVolmer(1, 0.1, 1.5, 0.5, 25)).toBeGreaterThan(0);
   });
   it('a current beyond double range is a domain error, not Infinity', () => {

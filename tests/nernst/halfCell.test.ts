@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { halfCell } from '../../src/nernst/halfCell';
 import { e0AtTemperature } from '../../src/cells/e0AtTemperature';
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K } from '../../src/constants';
-import { DomainError, NotFoundError } from '../../src/errors';
+import { InputError, NotFoundError } from '../../src/errors';
 import { builtinTable } from '../../src/table/builtin';
 
 const t = builtinTable();
@@ -81,19 +81,19 @@ describe('halfCell: properties and errors', () => {
   });
 
   it('refuses activities ≤ 0 and says when E° cannot be moved to T', () => {
-    expect(() => halfCell(row('Cu2+/Cu'), 0, null, null, 25)).toThrow(DomainError);
-    expect(() => halfCell(row('Cu2+/Cu'), 1, -1, null, 25)).toThrow(DomainError);
+    expect(() => halfCell(row('Cu2+/Cu'), 0, null, null, 25)).toThrow(InputError);
+    expect(() => halfCell(row('Cu2+/Cu'), 1, -1, null, 25)).toThrow(InputError);
     expect(() => halfCell(row('Bi3+/Bi'), 1, 1, 3, 60)).toThrow(NotFoundError);
-    expect(() => halfCell(row('Cu2+/Cu'), 1, 1, 3, 101)).toThrow(DomainError);
+    expect(() => halfCell(row('Cu2+/Cu'), 1, 1, 3, 101)).toThrow(InputError);
   });
 });
 
 describe('halfCell: activities beyond the range of doubles', () => {
   it('refuses an H+, OH- or species activity that underflows to 0 or overflows, and keeps a subnormal one', () => {
     // 10^−400 is 0 in doubles and 10^400 is +∞: no finite activity, so no potential.
-    expect(() => halfCell(row('H+/H2'), null, null, 400, 25)).toThrow(DomainError);
-    expect(() => halfCell(row('H+/H2'), null, null, -400, 25)).toThrow(DomainError);
-    expect(() => halfCell(row('Cu2+/Cu'), Number.POSITIVE_INFINITY, null, null, 25)).toThrow(DomainError);
+    expect(() => halfCell(row('H+/H2'), null, null, 400, 25)).toThrow(InputError);
+    expect(() => halfCell(row('H+/H2'), null, null, -400, 25)).toThrow(InputError);
+    expect(() => halfCell(row('Cu2+/Cu'), Number.POSITIVE_INFINITY, null, null, 25)).toThrow(InputError);
     // 10^−310 is a subnormal double (5 significant digits left): E = −0.05916·310 V to those digits.
     expect(halfCell(row('H+/H2'), null, null, 310, 25)).toBeCloseTo(-S * 310, 4);
   });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { halfCell } from '../../src/nernst/halfCell';
 import { halfCellBySpecies } from '../../src/nernst/halfCellBySpecies';
-import { DomainError, InputError, NotFoundError } from '../../src/errors';
+import { InputError, NotFoundError } from '../../src/errors';
 import { builtinTable } from '../../src/table/builtin';
 
 const t = builtinTable();
@@ -44,6 +44,6 @@ describe('halfCellBySpecies', () => {
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+', 'Cu(2+)'], [1, 2], 25)).toThrow(/named twice/);
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+?'], [1], 25)).toThrow(NotFoundError);
     expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Xx2+'], [1], 25)).toThrow(/"Xx2\+" is not a species of the half-reaction of Cu2\+\/Cu/);
-    expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+'], [0], 25)).toThrow(DomainError);
+    expect(() => halfCellBySpecies(row('Cu2+/Cu'), ['Cu2+'], [0], 25)).toThrow(InputError);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { waterPKw } from '../../src/nernst/waterPKw';
-import { DomainError } from '../../src/errors';
+import { InputError } from '../../src/errors';
 
 describe('waterPKw (Bandura & Lvov 2006 on the saturation curve)', () => {
   // Check values: Bandura & Lvov, J. Phys. Chem. Ref. Data 35 (2006) 15, pKw of liquid water at 0.1 MPa
@@ -25,8 +25,8 @@ describe('waterPKw (Bandura & Lvov 2006 on the saturation curve)', () => {
   });
 
   it('refuses temperatures where it does not apply', () => {
-    expect(() => waterPKw(-1)).toThrow(DomainError);
-    expect(() => waterPKw(400)).toThrow(DomainError);
-    expect(() => waterPKw(Number.NaN)).toThrow(DomainError);
+    expect(() => waterPKw(-1)).toThrow(InputError);
+    expect(() => waterPKw(400)).toThrow(InputError);
+    expect(() => waterPKw(Number.NaN)).toThrow(InputError);
   });
 });

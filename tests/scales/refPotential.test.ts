@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DomainError, NotFoundError } from '../../src/errors';
+import { InputError, NotFoundError } from '../../src/errors';
 import { refPotential } from '../../src/scales/refPotential';
 import { builtinTable } from '../../src/table/builtin';
 import type { ElectrodeRow } from '../../src/table/types';
@@ -31,8 +31,8 @@ describe('refPotential', () => {
     expect(() => refPotential(row('Ag/AgCl/seawater'), 40)).toThrow(/Ag\/AgCl\/seawater/);
   });
   it('outside 0…100 °C is a domain error', () => {
-    expect(() => refPotential(row('SCE'), -1)).toThrow(DomainError);
-    expect(() => refPotential(row('SCE'), 100.5)).toThrow(DomainError);
+    expect(() => refPotential(row('SCE'), -1)).toThrow(InputError);
+    expect(() => refPotential(row('SCE'), 100.5)).toThrow(InputError);
     expect(refPotential(row('SCE'), 0)).toBeCloseTo(0.2412 + 0.661e-3 * 25, 9);
   });
 });

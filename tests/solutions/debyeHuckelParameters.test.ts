@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DomainError } from '../../src/errors';
+import { InputError } from '../../src/errors';
 import { debyeHuckelParameters } from '../../src/solutions/debyeHuckelParameters';
 
 /** Molar-scale value from the molal one: A_c = A_m/√(ρw in kg/dm³). */
@@ -46,7 +46,7 @@ describe('debyeHuckelParameters', () => {
     }
   });
   it('is available from 0 to 100 °C only', () => {
-    expect(() => debyeHuckelParameters(-0.1)).toThrow(DomainError);
-    expect(() => debyeHuckelParameters(100.1)).toThrow(DomainError);
+    expect(() => debyeHuckelParameters(-0.1)).toThrow(InputError);
+    expect(() => debyeHuckelParameters(100.1)).toThrow(InputError);
   });
 });
