@@ -5,7 +5,7 @@
 import * as F from '../families/electrolysis';
 
 /**
- * Specific conductivity of an electrolyte from a published correlation, in S/m. KOH: Gilliam et al., Int. J. Hydrogen Energy 32 (2007) 359, 0–12 mol/L and 0–100 °C; outside its range the answer is #VALUE! with the range (never an extrapolation).
+ * Specific conductivity of an electrolyte from a published correlation, in S/m. KOH: Gilliam et al., Int. J. Hydrogen Energy 32 (2007) 359, 0–12 mol/L and 0–100 °C; outside its range the answer is #VALUE! with the range (never an extrapolation). Other electrolytes (NaOH, H2SO4, copper or zinc sulfate liquors) have no built-in correlation yet and answer #N/A: enter a measured conductivity in OHMICDROP or CELLVOLTAGE.
  * @customfunction CONDUCTIVITY
  * @helpurl https://localhost:3000/docs/functions.html#conductivity
  * @param electrolyte Electrolyte name: "KOH".

@@ -23,7 +23,9 @@ export function electrolyteConductivity(electrolyte: string, concentration: numb
   const key = electrolyte.trim().toUpperCase();
   const f = CORRELATIONS[key];
   if (f === undefined) {
-    throw new NotFoundError(`no conductivity correlation for "${electrolyte}"; available: ${Object.keys(CORRELATIONS).join(', ')}`);
+    throw new NotFoundError(
+      `no conductivity correlation for "${electrolyte}"; available: ${Object.keys(CORRELATIONS).join(', ')}; for another electrolyte enter a measured conductivity in S/m in OHMICDROP or CELLVOLTAGE`,
+    );
   }
   return f(concentration, temperatureC);
 }

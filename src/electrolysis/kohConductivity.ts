@@ -6,6 +6,8 @@ const KOH = data.conductivity.KOH;
 const { A, B, C, D, E, F } = KOH.coefficients;
 const [M_MIN, M_MAX] = KOH.concentration_mol_L;
 const [T_MIN, T_MAX] = KOH.temperature_C;
+/** Above this no solution is that concentrated (saturation at 25 °C): a number beyond it is a mass percentage. */
+const M_SATURATED = KOH.saturation_mol_L;
 /** S/m per S/cm. */
 const S_M_PER_S_CM = 100;
 
@@ -24,7 +26,8 @@ const S_M_PER_S_CM = 100;
  */
 export function kohConductivity(molarity: number, temperatureC: number): number {
   if (!(molarity >= M_MIN && molarity <= M_MAX)) {
-    throw new InputError(`KOH concentration ${molarity} mol/L is outside the correlation's range ${M_MIN}–${M_MAX} mol/L (Gilliam et al. 2007)`);
+    const percent = molarity > M_SATURATED && molarity <= 100 ? '; a mass percentage? the concentration is in mol per litre of solution' : '';
+    throw new InputError(`KOH concentration ${molarity} mol/L is outside the correlation's range ${M_MIN}–${M_MAX} mol/L (Gilliam et al. 2007)${percent}`);
   }
   if (!(temperatureC >= T_MIN && temperatureC <= T_MAX)) {
     throw new InputError(`temperature ${temperatureC} °C is outside the KOH correlation's range ${T_MIN}–${T_MAX} °C (Gilliam et al. 2007)`);

@@ -45,6 +45,17 @@ describe('CONDUCTIVITY, BRUGGEMAN, OHMICDROP', () => {
     expect((r[2][0] as { message: string }).message).toMatch(/0–100 °C/);
     expect(isError(one(await call('CONDUCTIVITY', 'NaCl', 1, null)), '#N/A')).toBe(true);
   });
+  it('says what to change: a mass percentage typed for mol/L, a negative concentration, an electrolyte without a correlation', async () => {
+    const pct = one(await call('CONDUCTIVITY', 'KOH', 30, 80)) as { code: string; message: string };
+    expect(pct.code).toBe('#VALUE!');
+    expect(pct.message).toBe("KOH concentration 30 mol/L is outside the correlation's range 0–12 mol/L (Gilliam et al. 2007); a mass percentage? the concentration is in mol per litre of solution");
+    const neg = one(await call('CONDUCTIVITY', 'KOH', -1, 80)) as { code: string; message: string };
+    expect(neg.code).toBe('#VALUE!');
+    expect(neg.message).toBe('concentration_mol_L must be ≥ 0; got -1');
+    const naoh = one(await call('CONDUCTIVITY', 'NaOH', 2, 80)) as { code: string; message: string };
+    expect(naoh.code).toBe('#N/A');
+    expect(naoh.message).toMatch(/no conductivity correlation for "NaOH"; available: KOH; .*OHMICDROP or CELLVOLTAGE/);
+  });
   it('BRUGGEMAN and OHMICDROP with a gas fraction', async () => {
     expect(one(await call('BRUGGEMAN', 100, 0.2))).toBeCloseTo(71.554, 3); // 100 × 0.8^1.5
     expect(one(await call('OHMICDROP', 3000, 2, 100, null))).toBeCloseTo(0.06, 12); // j·d/κ

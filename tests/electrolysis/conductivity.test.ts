@@ -33,6 +33,9 @@ describe('kohConductivity (Gilliam, Graydon, Kirk & Thorpe, Int. J. Hydrogen Ene
     expect(() => kohConductivity(12.5, 25)).toThrow(/0–12 mol\/L/);
     expect(() => kohConductivity(6, 101)).toThrow(/0–100 °C/);
     expect(() => kohConductivity(6, -1)).toThrow(InputError);
+    // 30 cannot be a molarity: KOH saturates at 14.1 mol/L at 25 °C (Sipos, Hefter & May, J. Chem. Eng. Data 45 (2000) 613, abstract)
+    expect(() => kohConductivity(30, 25)).toThrow(/a mass percentage\?/);
+    expect(() => kohConductivity(13, 25)).toThrow(/0–12 mol\/L \(Gilliam et al\. 2007\)$/); // a possible molarity: no hint
   });
   it('electrolyteConductivity dispatches by name and names what exists', () => {
     expect(electrolyteConductivity(' koh ', 6.9, 80)).toBe(kohConductivity(6.9, 80));
