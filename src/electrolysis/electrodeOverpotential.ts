@@ -23,6 +23,9 @@ import { InputError, finite } from '../errors';
  * @param limitingCurrentDensity limiting current density (> j), or null for none
  * @param temperatureC temperature, °C
  */
+/** j/i0 above which r² + 4a is r² to double precision (and r² may overflow). */
+const LARGE_RATIO = 1e150;
+
 export function electrodeOverpotential(
   currentDensity: number,
   i0: number,
@@ -40,7 +43,8 @@ export function electrodeOverpotential(
     a = 1 - currentDensity / limitingCurrentDensity;
   }
   const r = currentDensity / i0;
-  // larger root of a·y² − r·y − 1 = 0, written to avoid cancellation
-  const y = (r + Math.sqrt(r * r + 4 * a)) / (2 * a);
-  return finite((thermalVoltage(temperatureC) / alpha) * Math.log(y), 'the overpotential');
+  // larger root of a·y² − r·y − 1 = 0, written to avoid cancellation; where r² would overflow
+  // (j/i0 above about 1e150) the root is r/a to double precision, so its logarithm is taken from r
+  const lnY = r > LARGE_RATIO ? Math.log(r) - Math.log(a) : Math.log((r + Math.sqrt(r * r + 4 * a)) / (2 * a));
+  return finite((thermalVoltage(temperatureC) / alpha) * lnY, 'the overpotential');
 }

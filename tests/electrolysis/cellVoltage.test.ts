@@ -26,6 +26,13 @@ describe('electrodeOverpotential (Butler–Volmer, equal coefficients, optional 
     // mass transfer adds (RT/αF)·ln(iL/(iL − j)) = ln 4 × 55.7 mV here
     expect(electrodeOverpotential(j, i0, a, iL, 50) - electrodeOverpotential(j, i0, a, null, 50)).toBeCloseTo((thermalVoltage(50) / a) * Math.log(4), 9);
   });
+  it('answers where j/i0 is beyond 1e154 (j/i0 squared would overflow) instead of #NUM!', () => {
+    // Tafel line again (B&F eq. 3.4.12): η = (RT/αF)·ln(j/i0), here ln(3e303) ≈ 699.0
+    const b = thermalVoltage(25) / 0.5;
+    expect(electrodeOverpotential(3000, 1e-300, 0.5, null, 25)).toBeCloseTo(b * (Math.log(3000) + 300 * Math.LN10), 9);
+    // with a limiting current the factor 1/(1 − j/iL) still adds (RT/αF)·ln 4 (B&F eq. 3.4.15)
+    expect(electrodeOverpotential(300, 1e-300, 0.5, 400, 25) - electrodeOverpotential(300, 1e-300, 0.5, null, 25)).toBeCloseTo(b * Math.log(4), 9);
+  });
   it('a current density at or above the limiting current is an input error', () => {
     expect(() => electrodeOverpotential(400, 1e-2, 0.5, 400, 50)).toThrow(InputError);
     expect(() => electrodeOverpotential(500, 1e-2, 0.5, 400, 50)).toThrow(/limiting current/);
