@@ -77,8 +77,17 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
 
 describe('impressed current and environment', () => {
   it('GROUNDBEDRESISTANCE (Dwight), RECTIFIERVOLTAGE, CABLEDROP', async () => {
-    expect(one(await call('GROUNDBEDRESISTANCE', 'vertical', 30, 2, 0.1, null, null, null))).toBeCloseTo(9.72876, 4);
-    expect(one(await call('GROUNDBEDRESISTANCE', 'parallel', 30, 2, 0.1, 5, 6, null))).toBeCloseTo(2.32385, 4);
+    expect(one(await call('GROUNDBEDRESISTANCE', 'vertical', 30, 2, 0.1, null, null, null))).toBeCloseTo(9.72876, 4); // ρ/(2πL)(ln(8L/d) − 1)
+    // USACE ETL 1110-9-10(FR) example 2-3: 2 in × 60 in anodes in 4,500 Ω·cm, 10 ft apart: nine 3.29 Ω, fourteen 2.26 Ω
+    const r = await call('GROUNDBEDRESISTANCE', 'parallel', 45, 1.524, 0.0508, [[9], [14], [1]], 3.048, null);
+    expect(r[0][0]).toBeCloseTo(3.29, 2);
+    expect(r[1][0]).toBeCloseTo(2.26, 2);
+    expect(isError(r[2][0], '#VALUE!')).toBe(true); // one anode is not a line
+    const close = one(await call('GROUNDBEDRESISTANCE', 'parallel', 30, 2, 0.1, 5, 1, null));
+    expect(isError(close, '#VALUE!')).toBe(true);
+    expect(msg(close)).toMatch(/spacing/);
+    // MIL-HDBK-1004/10 pier example: dc voltage = IR + 3 = 14.7 × 0.06 + 3 = 3.882 V
+    expect(one(await call('RECTIFIERVOLTAGE', 14.7, 0.06, 3))).toBeCloseTo(3.882, 9);
     expect(one(await call('RECTIFIERVOLTAGE', 10, 1.5, null))).toBe(17);
     expect(one(await call('CABLEDROP', 10, 200, 1.15))).toBeCloseTo(2.3, 12);
   });
