@@ -122,6 +122,20 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     const b = anodeResistance('short-standoff', 1, dims({ lengthM: 0.3999, radiusM: 0.1 }));
     expect(Math.abs(a - b) / a).toBeLessThan(0.1);
   });
+  it('current demand and anode count reproduce the US military handbooks\' design examples', () => {
+    const ft2 = 0.3048 ** 2;
+    const mAft2 = 0.001 / ft2; // 1 mA/ft² in A/m²
+    // USACE ETL 1110-9-10(FR), example 2-4 (usacetechnicalletters.tpub.com/ETL-1110-9-10(FR)/ETL-1110-9-10(FR)0048.htm):
+    // I = A·I'·(1.0 − CE) = 17,672 sq ft × 2 mA/sq ft × (1.0 − 0.0) = 35 amp; the coating factor here is 1 − CE
+    expect(currentDemand(17672 * ft2, 2 * mAft2, 1)).toBeCloseTo(35.344, 3);
+    // "N = 35/6.6 = 5.3; use 6 anodes"; example 2-3 (…0037.htm) "N = 8.2/1.0 = 8.2 anodes; use nine"
+    expect(anodeCount(35, 6.6, null, null)).toBe(6);
+    expect(anodeCount(8.2, 1.0, null, null)).toBe(9);
+    // MIL-HDBK-1004/10 pier example (ufgscriteria.tpub.com/3_570_02/3_570_020235.htm): 5,600 ft² × 2 mA/ft² = 11.2 A
+    expect(currentDemand(5600 * ft2, 2 * mAft2, 1)).toBeCloseTo(11.2, 9);
+    // galvanic example (…3_570_020224.htm): "n = 726/17 = 42.7 (use 43 anodes)"
+    expect(anodeCount(0.726, 0.017, null, null)).toBe(43);
+  });
   it('§7.7 output, §7.8 number of anodes', () => {
     expect(anodeOutput(-0.8, -1.05, 0.125)).toBeCloseTo(2, 12);
     expect(() => anodeOutput(-0.8, -0.7, 0.1)).toThrow(/driving voltage/);
