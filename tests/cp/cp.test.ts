@@ -149,6 +149,8 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(anodeData('Al-Zn-In/seawater', 'potential')).toBe(-1.05);
     expect(anodeData('zinc', 'capacity')).toBe(780);
     expect(anodeData('Mg', 'scale')).toBe('CSE');
+    // MIL-HDBK-1004/10 galvanic example: S = 8.8 lb/(A·yr) theoretical, E = 0.50 → 1097 A·h/kg useful
+    expect(Math.abs((anodeData('Mg', 'capacity') as number) / ((8760 / (8.8 * 0.45359237)) * 0.5) - 1)).toBeLessThan(0.005);
     expect(() => anodeData('Cd', 'capacity')).toThrow(NotFoundError);
   });
 });
