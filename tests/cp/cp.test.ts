@@ -54,6 +54,18 @@ describe('protectionCriterion: criteria as the standards state them, per electro
     expect(() => protectionCriterion('SCE', 'standard')).toThrow(/do not convert/);
     expect(() => protectionCriterion('CSE', 'wet')).toThrow(InputError);
   });
+  it('the #N/A messages name the standards and fit an Excel error message whole (300 characters)', () => {
+    for (const c of ['anaerobic', 'hightemperature', 'highstrength']) {
+      let m = '';
+      try {
+        protectionCriterion('CSE', c);
+      } catch (e) {
+        m = (e as Error).message;
+      }
+      expect(m, c).toMatch(/ISO 15589/);
+      expect(m.length, c).toBeLessThanOrEqual(300);
+    }
+  });
 });
 
 describe('survey helpers', () => {
