@@ -166,15 +166,15 @@ function anodedata(anode: any[][], property?: any[][]): any[][] {
 }
 
 /**
- * Impressed-current groundbed resistance in Ω: one vertical anode (Dwight 1936, ρ/(2πL)(ln(8L/d) − 1)), one horizontal anode at depth (Dwight), or N vertical anodes in a line (parallel-anode formula after Sunde).
+ * Impressed-current groundbed resistance in Ω: one vertical anode (Dwight 1936, ρ/(2πL)(ln(8L/d) − 1), the shape function K of MIL-HDBK-1004/10 §6.2.1.4a), one horizontal anode at depth (Dwight), or N vertical anodes in a line, Rv/N + ρ/(πN²S)·Σ(N − k)/k (the paralleling factor of MIL-HDBK-1004/10 §6.2.1.4b; Sunde’s ln(0.656N) is its large-N form). Spacing at least one anode length.
  * @customfunction GROUNDBEDRESISTANCE
  * @helpurl https://localhost:3000/docs/functions.html#groundbedresistance
  * @param layout "vertical", "horizontal" or "parallel".
  * @param resistivity_ohm_m Soil resistivity, Ω·m.
  * @param length_m Anode length, m.
  * @param diameter_m Anode diameter, m.
- * @param [count] Number of anodes (parallel; default 1).
- * @param [spacing_m] Spacing, m (parallel).
+ * @param [count] Number of anodes (parallel: 2 to 1000; default 1).
+ * @param [spacing_m] Centre-to-centre spacing, m (parallel; at least the anode length).
  * @param [depth_m] Depth, m (horizontal).
  * @returns Resistance in Ω.
  */

@@ -199,14 +199,14 @@ export const ANODEDATA = worksheet({
 
 export const GROUNDBEDRESISTANCE = worksheet({
   id: 'GROUNDBEDRESISTANCE',
-  description: 'Impressed-current groundbed resistance in Ω: one vertical anode (Dwight 1936, ρ/(2πL)(ln(8L/d) − 1)), one horizontal anode at depth (Dwight), or N vertical anodes in a line (parallel-anode formula after Sunde).',
+  description: 'Impressed-current groundbed resistance in Ω: one vertical anode (Dwight 1936, ρ/(2πL)(ln(8L/d) − 1), the shape function K of MIL-HDBK-1004/10 §6.2.1.4a), one horizontal anode at depth (Dwight), or N vertical anodes in a line, Rv/N + ρ/(πN²S)·Σ(N − k)/k (the paralleling factor of MIL-HDBK-1004/10 §6.2.1.4b; Sunde’s ln(0.656N) is its large-N form). Spacing at least one anode length.',
   args: [
     text('layout', '"vertical", "horizontal" or "parallel".'),
     req('resistivity_ohm_m', 'Ω·m', domains.positive, 'Soil resistivity, Ω·m.'),
     req('length_m', 'm', domains.positive, 'Anode length, m.'),
     req('diameter_m', 'm', domains.positive, 'Anode diameter, m.'),
-    opt('count', '', 1, domains.positiveInteger, 'Number of anodes (parallel; default 1).'),
-    opt('spacing_m', 'm', null, domains.positive, 'Spacing, m (parallel).'),
+    opt('count', '', 1, domains.positiveInteger, 'Number of anodes (parallel: 2 to 1000; default 1).'),
+    opt('spacing_m', 'm', null, domains.positive, 'Centre-to-centre spacing, m (parallel; at least the anode length).'),
     opt('depth_m', 'm', null, domains.positive, 'Depth, m (horizontal).'),
   ],
   result: 'Resistance in Ω.',

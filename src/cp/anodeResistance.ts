@@ -29,7 +29,7 @@ function need(v: number | null, name: string, shape: string): number {
  * A shape whose dimensions fall outside its condition is refused with the shape to use instead.
  *
  * Syntax: anodeResistance(shape, resistivityOhmM, dims)
- * Example: anodeResistance("long-standoff", 0.3, { lengthM: 2, radiusM: 0.1, … }) → 0.1034 Ω
+ * Example: anodeResistance("long-standoff", 0.3, { lengthM: 2, radiusM: 0.1, … }) → 0.0807 Ω
  * See also: anodeOutput
  *
  * @param shape "long-standoff", "short-standoff", "long-flush" or "bracelet"

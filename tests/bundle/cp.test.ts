@@ -77,8 +77,17 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
 
 describe('impressed current and environment', () => {
   it('GROUNDBEDRESISTANCE (Dwight), RECTIFIERVOLTAGE, CABLEDROP', async () => {
-    expect(one(await call('GROUNDBEDRESISTANCE', 'vertical', 30, 2, 0.1, null, null, null))).toBeCloseTo(9.72876, 4);
-    expect(one(await call('GROUNDBEDRESISTANCE', 'parallel', 30, 2, 0.1, 5, 6, null))).toBeCloseTo(2.32385, 4);
+    expect(one(await call('GROUNDBEDRESISTANCE', 'vertical', 30, 2, 0.1, null, null, null))).toBeCloseTo(9.72876, 4); // ρ/(2πL)(ln(8L/d) − 1)
+    // USACE ETL 1110-9-10(FR) example 2-3: 2 in × 60 in anodes in 4,500 Ω·cm, 10 ft apart: nine 3.29 Ω, fourteen 2.26 Ω
+    const r = await call('GROUNDBEDRESISTANCE', 'parallel', 45, 1.524, 0.0508, [[9], [14], [1]], 3.048, null);
+    expect(r[0][0]).toBeCloseTo(3.29, 2);
+    expect(r[1][0]).toBeCloseTo(2.26, 2);
+    expect(isError(r[2][0], '#VALUE!')).toBe(true); // one anode is not a line
+    const close = one(await call('GROUNDBEDRESISTANCE', 'parallel', 30, 2, 0.1, 5, 1, null));
+    expect(isError(close, '#VALUE!')).toBe(true);
+    expect(msg(close)).toMatch(/spacing/);
+    // MIL-HDBK-1004/10 pier example: dc voltage = IR + 3 = 14.7 × 0.06 + 3 = 3.882 V
+    expect(one(await call('RECTIFIERVOLTAGE', 14.7, 0.06, 3))).toBeCloseTo(3.882, 9);
     expect(one(await call('RECTIFIERVOLTAGE', 10, 1.5, null))).toBe(17);
     expect(one(await call('CABLEDROP', 10, 200, 1.15))).toBeCloseTo(2.3, 12);
   });
@@ -87,6 +96,48 @@ describe('impressed current and environment', () => {
     expect(one(await call('LAYERRESISTIVITY', 1.5, 10, 3, 4))).toBeCloseTo(62.8319, 4);
     expect(one(await call('SEAWATERRESISTIVITY', 35, 15))).toBeCloseTo(0.233, 3); // UNESCO 1983: C(35, 15) = 42.914 mS/cm
     expect(isError(one(await call('SEAWATERRESISTIVITY', 35, 60)), '#VALUE!')).toBe(true);
+  });
+});
+
+describe('ranges: each function spills a column element by element, a bad element giving its own error', () => {
+  // [id, scalar arguments, index of the argument given as a range, its values, the index of a value that must fail]
+  const cases: Array<[string, unknown[], number, unknown[], number | null]> = [
+    ['POLARIZATIONSHIFT', [-0.78, -0.65], 0, [-0.78, -0.9, -850], 2],
+    ['IRDROP', [-1.2, -0.92], 1, [-0.92, -1.0, -920], 2],
+    ['READINGAT25', [-0.85, 'CSE', 35], 2, [15, 25, 35, 150], 3],
+    ['COATINGBREAKDOWN', [0.05, 0.025, 20, 'mean'], 2, [10, 20, 30, 5000], 3],
+    ['CURRENTDEMAND', [1000, 0.1, 0.3], 1, [0.05, 0.1, 0.2, 100], 3],
+    ['ANODEMASS', [10, 25, 2000, 0.9], 2, [780, 1300, 2000, 2], 3],
+    ['ANODELIFE', [1216.67, 2000, 0.9, 10], 3, [5, 10, 20, 0], 3],
+    ['ANODERESISTANCE', ['bracelet', 0.3, null, null, null, null, 0.5, null], 1, [0.2, 0.3, 1.5, -1], 3],
+    ['ANODEOUTPUT', [-0.8, -1.05, 0.125], 1, [-1.05, -1.0, -1.7, -0.7], 3],
+    ['ANODECOUNT', [30, 2, null, null], 0, [10, 30, 31, -1], 3],
+    ['ANODEDATA', ['Al-Zn-In/seawater', 'capacity'], 0, ['Al-Zn-In/seawater', 'Zn/seawater', 'Mg/standard', 'Cd'], 3],
+    ['GROUNDBEDRESISTANCE', ['vertical', 30, 2, 0.1, null, null, null], 1, [10, 30, 100, -5], 3],
+    ['RECTIFIERVOLTAGE', [10, 1.5, 2], 0, [5, 10, 20, -1], 3],
+    ['CABLEDROP', [10, 200, 1.15], 1, [100, 200, 400, -1], 3],
+    ['WENNERRESISTIVITY', [3, 5], 1, [2, 5, 8, -1], 3],
+    ['LAYERRESISTIVITY', [1.5, 10, 3, 4], 3, [3, 4, 6, 20], 3],
+    ['SEAWATERRESISTIVITY', [35, 15], 1, [5, 15, 25, 60], 3],
+    ['PROTECTIONCRITERION', ['CSE', 'standard'], 1, ['standard', 'polarisation', 'anaerobic'], 2],
+    ['MASSLOSSRATE', [0.65, 28.5, 168, 7.85, 'mm/y'], 4, ['mm/y', 'um/y', 'mpy', 'furlong/fortnight'], 3],
+    ['PITTINGFACTOR', [500, 50], 1, [25, 50, 500, 0], 3],
+    ['STERNGEARYB', [0.026, 1000], 1, [100, 1000, 1e5, 0.026], 3],
+    ['RATECONVERT', [1, 'uA/cm2', 'mm/y', 27.92, 7.87], 4, [2.7, 7.87, 8.96, 7870], 3],
+  ];
+  it.each(cases)('%s', async (id, args, at, values, bad) => {
+    const column = values.map((v) => [v]);
+    const r = await call(id, ...args.map((a, i) => (i === at ? column : a)));
+    expect(r.length).toBe(values.length);
+    for (let i = 0; i < values.length; i++) {
+      const alone = one(await call(id, ...args.map((a, j) => (j === at ? values[i] : a))));
+      if (i === bad) {
+        expect(isError(r[i][0], '#VALUE!') || isError(r[i][0], '#NUM!') || isError(r[i][0], '#N/A')).toBe(true);
+      } else {
+        expect(typeof r[i][0]).toBe('number');
+      }
+      expect(r[i][0]).toEqual(alone);
+    }
   });
 });
 

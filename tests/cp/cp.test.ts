@@ -54,6 +54,18 @@ describe('protectionCriterion: criteria as the standards state them, per electro
     expect(() => protectionCriterion('SCE', 'standard')).toThrow(/do not convert/);
     expect(() => protectionCriterion('CSE', 'wet')).toThrow(InputError);
   });
+  it('the #N/A messages name the standards and fit an Excel error message whole (300 characters)', () => {
+    for (const c of ['anaerobic', 'hightemperature', 'highstrength']) {
+      let m = '';
+      try {
+        protectionCriterion('CSE', c);
+      } catch (e) {
+        m = (e as Error).message;
+      }
+      expect(m, c).toMatch(/ISO 15589/);
+      expect(m.length, c).toBeLessThanOrEqual(300);
+    }
+  });
 });
 
 describe('survey helpers', () => {
@@ -77,6 +89,19 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(anodeMass(10, 25, 2000, 0.9)).toBeCloseTo(1216.6667, 4); // 10·25·8760/(0.9·2000), independent arithmetic
     expect(anodeLife(1216.6667, 2000, 0.9, 10)).toBeCloseTo(25, 4);
     expect(() => anodeMass(10, 25, 2, 0.9)).toThrow(/A·h\/kg/);
+  });
+  it('the mass relation reproduces the published galvanic-anode examples of MIL-HDBK-1004/10 (W = YSI/E)', () => {
+    // UFC 3-570-02N copy of MIL-HDBK-1004/10, ufgscriteria.tpub.com/3_570_02/3_570_020224.htm: magnesium, Y = 15 years,
+    // S = 8.8 lb/(A·yr), E = 0.50, I = 0.73 A → W = 193 pounds; …020212.htm: I = 0.858 A → 227 pounds. S is the
+    // theoretical consumption, so ε = 8760/(S × 0.45359237 kg/lb) A·h/kg, with E in the place of the factor.
+    const lb = 0.45359237;
+    const eps = 8760 / (8.8 * lb);
+    expect(eps).toBeCloseTo(2194.6, 1);
+    expect(anodeMass(0.73, 15, eps, 0.5) / lb).toBeCloseTo(192.72, 2);
+    expect(Math.round(anodeMass(0.73, 15, eps, 0.5) / lb)).toBe(193);
+    expect(Math.round(anodeMass(0.858, 15, eps, 0.5) / lb)).toBe(227);
+    // and the life of that mass at that current is the 15 years back
+    expect(anodeLife(anodeMass(0.73, 15, eps, 0.5), eps, 0.5, 0.73)).toBeCloseTo(15, 9);
   });
   it('§6.4 coating breakdown fc = a + b·t (Table 10-4 category II, 0–30 m: a = 0.05, b = 0.025)', () => {
     expect(coatingBreakdown(0.05, 0.025, 20, 'initial')).toBe(0.05);
@@ -109,6 +134,20 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     const b = anodeResistance('short-standoff', 1, dims({ lengthM: 0.3999, radiusM: 0.1 }));
     expect(Math.abs(a - b) / a).toBeLessThan(0.1);
   });
+  it('current demand and anode count reproduce the US military handbooks\' design examples', () => {
+    const ft2 = 0.3048 ** 2;
+    const mAft2 = 0.001 / ft2; // 1 mA/ft² in A/m²
+    // USACE ETL 1110-9-10(FR), example 2-4 (usacetechnicalletters.tpub.com/ETL-1110-9-10(FR)/ETL-1110-9-10(FR)0048.htm):
+    // I = A·I'·(1.0 − CE) = 17,672 sq ft × 2 mA/sq ft × (1.0 − 0.0) = 35 amp; the coating factor here is 1 − CE
+    expect(currentDemand(17672 * ft2, 2 * mAft2, 1)).toBeCloseTo(35.344, 3);
+    // "N = 35/6.6 = 5.3; use 6 anodes"; example 2-3 (…0037.htm) "N = 8.2/1.0 = 8.2 anodes; use nine"
+    expect(anodeCount(35, 6.6, null, null)).toBe(6);
+    expect(anodeCount(8.2, 1.0, null, null)).toBe(9);
+    // MIL-HDBK-1004/10 pier example (ufgscriteria.tpub.com/3_570_02/3_570_020235.htm): 5,600 ft² × 2 mA/ft² = 11.2 A
+    expect(currentDemand(5600 * ft2, 2 * mAft2, 1)).toBeCloseTo(11.2, 9);
+    // galvanic example (…3_570_020224.htm): "n = 726/17 = 42.7 (use 43 anodes)"
+    expect(anodeCount(0.726, 0.017, null, null)).toBe(43);
+  });
   it('§7.7 output, §7.8 number of anodes', () => {
     expect(anodeOutput(-0.8, -1.05, 0.125)).toBeCloseTo(2, 12);
     expect(() => anodeOutput(-0.8, -0.7, 0.1)).toThrow(/driving voltage/);
@@ -122,22 +161,69 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(anodeData('Al-Zn-In/seawater', 'potential')).toBe(-1.05);
     expect(anodeData('zinc', 'capacity')).toBe(780);
     expect(anodeData('Mg', 'scale')).toBe('CSE');
+    // MIL-HDBK-1004/10 galvanic example: S = 8.8 lb/(A·yr) theoretical, E = 0.50 → 1097 A·h/kg useful
+    expect(Math.abs((anodeData('Mg', 'capacity') as number) / ((8760 / (8.8 * 0.45359237)) * 0.5) - 1)).toBeLessThan(0.005);
     expect(() => anodeData('Cd', 'capacity')).toThrow(NotFoundError);
   });
 });
 
 describe('impressed current', () => {
-  it('Dwight vertical rod, buried horizontal wire, anodes in parallel (independent evaluation)', () => {
-    // Dwight (1936): ρ/(2πL)(ln(8L/d) − 1) — from memory; 30 Ω·m, L = 2 m, d = 0.1 m
-    expect(groundbedResistance('vertical', 30, 2, 0.1, 1, null, null)).toBeCloseTo(9.72876, 4);
-    // Dwight buried wire, total length 10 m at 1.5 m, d = 0.1 m; same form as lopesivan/matlab-eng rnHorizontais.py condutorUnico
-    expect(groundbedResistance('horizontal', 30, 10, 0.1, 1, null, 1.5)).toBeCloseTo(2.94421, 4);
-    // parallel-anode formula (after Sunde), 5 anodes 2 m long at 6 m — from memory
-    expect(groundbedResistance('parallel', 30, 2, 0.1, 5, 6, null)).toBeCloseTo(2.32385, 4);
-    expect(() => groundbedResistance('parallel', 30, 2, 0.1, 5, 1, null)).toThrow(/spacing/);
+  // Worked examples of the US military CP handbooks, read in their public copies (ρ in Ω·cm and lengths in ft there):
+  // MIL-HDBK-1004/10 (as reprinted in UFC 3-570-02N), impressed-current groundbed example, pages 181–182 of that copy
+  // (ufgscriteria.tpub.com/3_570_02/3_570_020207.htm and …0208.htm): Rv = ρK/L = 2,000 × 0.0167/7.0 = 4.77 Ω for a coke
+  // column 10 in × 84 in, K the shape function of §6.2.1.4a; three of them 20 ft apart Rn = Rv/n + ρ·p/S = 1.87 Ω with the
+  // paralleling factor p = 0.00289 (p = 0.00283 for four). USACE ETL 1110-9-10(FR) (5 Jan 1991), example 2-3, pages 35–36
+  // (usacetechnicalletters.tpub.com/ETL-1110-9-10(FR)/ETL-1110-9-10(FR)0037.htm, …0038.htm): a 2 in × 60 in anode in
+  // 4,500 Ω·cm, K = 0.0234 from table A-4 for L/d = 30, RA = 21.06 Ω; nine at 10 ft with PF = 0.00212 (table 3-5)
+  // RN = 3.29 Ω, "fourteen anodes will yield a groundbed-to-earth resistance of 2.26 ohms".
+  const ft = 0.3048;
+  const inch = 0.0254;
+  it('Dwight vertical anode reproduces the handbooks\' shape function K and their single-anode examples', () => {
+    // K = (ln(8L/d) − 1)/(2π × 30.48) in the handbooks' units: 0.0234 at L/d = 30, 0.0186 at L/d = 12 (10 ft × 10 in
+    // column, MIL-HDBK-1004/10 p. 205 of that copy, …3_570_020231.htm), 0.0167 at L/d = 8.4; R = ρK/L with ρ = 1 Ω·cm, L = 1 ft
+    const K = (ld: number) => groundbedResistance('vertical', 0.01, ft, ft / ld, 1, null, null);
+    expect(K(30)).toBeCloseTo(0.0234, 4);
+    expect(K(12)).toBeCloseTo(0.0186, 4);
+    expect(K(8.4)).toBeCloseTo(0.0167, 4);
+    // ETL 1110-9-10 example 2-3: 21.06 Ω
+    expect(groundbedResistance('vertical', 45, 5 * ft, 2 * inch, 1, null, null)).toBeCloseTo(21.06, 2);
+    // MIL-HDBK-1004/10: 4.77 Ω printed from K rounded to 0.0167; Dwight unrounded gives 4.79
+    expect(groundbedResistance('vertical', 20, 7 * ft, 10 * inch, 1, null, null)).toBeCloseTo(4.77, 1);
+    // MIL-HDBK-1004/10 pier example (…3_570_020237.htm): 2 in × 60 in anode in water of 22 Ω·cm, 22/5 × 0.0234 = 0.103 Ω
+    expect(groundbedResistance('vertical', 0.22, 5 * ft, 2 * inch, 1, null, null)).toBeCloseTo(0.103, 3);
+    // MIL-HDBK-419A vol. II §1.2.2.2: a 10 ft rod of 3/4 in in 10,000 Ω·cm reads 32 Ω on the nomograph (Figure 1-4)
+    expect(Math.abs(groundbedResistance('vertical', 100, 10 * ft, 0.75 * inch, 1, null, null) - 32)).toBeLessThan(0.5);
   });
-  it('rectifier voltage with back EMF and cable drop', () => {
-    expect(rectifierVoltage(10, 1.5, 2)).toBe(17);
+  it('anodes in a line: the handbooks\' paralleling factor and their groundbed examples', () => {
+    // ETL 1110-9-10 example 2-3: nine and fourteen anodes 10 ft apart
+    expect(groundbedResistance('parallel', 45, 5 * ft, 2 * inch, 9, 10 * ft, null)).toBeCloseTo(3.29, 2);
+    expect(groundbedResistance('parallel', 45, 5 * ft, 2 * inch, 14, 10 * ft, null)).toBeCloseTo(2.26, 2);
+    // MIL-HDBK-1004/10: three columns 20 ft apart, 1.87 Ω printed (from Rv = 4.77 and p = 0.00289 rounded)
+    expect(Math.abs(groundbedResistance('parallel', 20, 7 * ft, 10 * inch, 3, 20 * ft, null) - 1.87)).toBeLessThan(0.02);
+    // the paralleling factor itself: (R − Rv/N)·S/ρ in the handbooks' units (1 Ω·cm, 1 ft)
+    const pf = (n: number) => groundbedResistance('parallel', 0.01, ft, ft / 30, n, ft, null) - groundbedResistance('vertical', 0.01, ft, ft / 30, 1, null, null) / n;
+    expect(pf(4)).toBeCloseTo(0.00283, 5); // MIL-HDBK-1004/10
+    expect(pf(9)).toBeCloseTo(0.00212, 5); // ETL 1110-9-10 table 3-5
+    expect(Math.abs(pf(3) - 0.00289)).toBeLessThan(0.000015); // MIL-HDBK-1004/10 prints 0.00289; the sum gives 0.002901
+    // for many anodes the sum tends to Sunde's ln(0.656·N) form (independent evaluation)
+    const n = 200;
+    const sunde = (30 / (2 * Math.PI * n * 2)) * (Math.log(16 / 0.1) - 1 + (4 / 6) * Math.log(0.656 * n));
+    expect(Math.abs(groundbedResistance('parallel', 30, 2, 0.1, n, 6, null) / sunde - 1)).toBeLessThan(0.01);
+    expect(() => groundbedResistance('parallel', 30, 2, 0.1, 5, 1, null)).toThrow(/spacing/);
+    expect(() => groundbedResistance('parallel', 30, 2, 0.1, 5000, 6, null)).toThrow(/1000/);
+  });
+  it('Dwight buried horizontal anode (independent evaluation of the formula)', () => {
+    // total length 10 m at 1.5 m, d = 0.1 m; same form as lopesivan/matlab-eng rnHorizontais.py condutorUnico
+    expect(groundbedResistance('horizontal', 30, 10, 0.1, 1, null, 1.5)).toBeCloseTo(2.94421, 4);
+    expect(() => groundbedResistance('horizontal', 30, 10, 0.1, 1, null, null)).toThrow(/depth_m/);
+  });
+  it('rectifier voltage with back EMF and cable drop (MIL-HDBK-1004/10 worked examples)', () => {
+    // pier example (ufgscriteria.tpub.com/3_570_02/3_570_020237.htm): "dc voltage = IR+3 = (14.7 x 0.06) +3 = 3.882"
+    expect(rectifierVoltage(14.7, 0.06, 3)).toBeCloseTo(3.882, 9);
+    // bulkhead example, p. 205 of that copy (…3_570_020231.htm): "dc voltage = IR = 57.13 x 0.508 = 29 V"
+    expect(rectifierVoltage(57.13, 0.508, 0)).toBeCloseTo(29, 0);
+    // pier example: "200 feet of HMWPE Size #4 (0.254 ohms per M feet) … R = 0.254 x 0.2 = 0.05 ohms"; the drop at 1 A is that resistance
+    expect(cableDrop(1, 200 * ft, 0.254 / ft)).toBeCloseTo(0.0508, 9);
     expect(cableDrop(10, 200, 1.15)).toBeCloseTo(2.3, 12);
   });
 });
