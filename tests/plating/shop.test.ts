@@ -64,7 +64,7 @@ describe('platingCurrent, metalPerKAh, additiveDose, dragOutLoss', () => {
     // Faraday's law: 58.693 · 3600 / (2 · 96485.33212) = 1.094958 kg/(kA·h) (CODATA 2018 F, IUPAC Ni)
     expect(metalPerKAh('Ni', 2, 1)).toBeCloseTo(1.094958, 6);
     // tin: Sn(II) from acid baths, Sn(IV) from stannate baths deposit 2.2139 and 1.1070 kg/(kA·h)
-    expect(metalPerKAh('Sn', 2, 1)).toBeCloseTo((118.71 * 3600) / (2 * 96485.33212), 12);
+    expect(metalPerKAh('Sn', 2, 1)).toBeCloseTo((118.71 * 3600) / (2 * 96485.33212), 9);
     expect(metalPerKAh('Sn', 4, 1) * 2).toBeCloseTo(metalPerKAh('Sn', 2, 1), 12);
   });
   it('additive dose: 12 500 A·h at 150 mL/kA·h is 1875 mL', () => {
