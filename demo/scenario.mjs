@@ -59,6 +59,7 @@ export const scenario = {
         { key: 'niMass', label: 'Mass gained (weighed, dried)', value: 18.82, unit: 'g' },
         { key: 'niMass100', label: 'Mass at 100 % efficiency', formula: '=CELLWRIGHT.DEPOSITMASS({niI},{niHours},"Ni",{niN})', unit: 'g', digits: 2 },
         { key: 'niEff', label: 'Measured cathode efficiency', formula: '=CELLWRIGHT.CURRENTEFFICIENCY({niMass},{niI},{niHours},"Ni",{niN})', unit: 'fraction', digits: 3, note: 'a value above 1 means a weighing or current reading to question' },
+        { label: 'Average panel thickness from the weight gain', formula: '=CELLWRIGHT.THICKNESSFROMMASS({niMass},{niArea},{niRho})', unit: 'µm', digits: 1 },
         { key: 'niV', label: 'Tank voltage (rectifier display)', value: 5.2, unit: 'V' },
         { label: 'DC energy per kg of nickel deposited', formula: '=CELLWRIGHT.SPECIFICENERGY({niV},"Ni",{niN},{niEff})', unit: 'kWh/kg', digits: 2, note: 'at the measured efficiency; rectifier losses not included' },
 

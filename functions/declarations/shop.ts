@@ -191,3 +191,16 @@ function dragoutloss(dragout_L: any[][], concentration_g_L: any[][], loads?: any
 function throwingpower(distance_ratio: any[][], weight_ratio: any[][]): any[][] {
   return F.THROWINGPOWER(distance_ratio, weight_ratio) as any;
 }
+
+/**
+ * Average coating thickness, in µm, from the mass gained (or stripped) over an area and the coating's density: m/(ρ·A). Local thickness in recesses and on edges differs from the average.
+ * @customfunction THICKNESSFROMMASS
+ * @helpurl https://localhost:3000/docs/functions.html#thicknessfrommass
+ * @param mass_g Mass of the coating (weight gain, or mass stripped), in g.
+ * @param area_dm2 Coated area, in dm².
+ * @param density_g_cm3 Density of the coating, in g/cm³.
+ * @returns Thickness in µm.
+ */
+function thicknessfrommass(mass_g: any[][], area_dm2: any[][], density_g_cm3: any[][]): any[][] {
+  return F.THICKNESSFROMMASS(mass_g, area_dm2, density_g_cm3) as any;
+}

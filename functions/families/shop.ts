@@ -12,6 +12,7 @@ import { hullCell } from '../../src/plating/hullCell';
 import { metalPerKAh } from '../../src/plating/metalPerKAh';
 import { partialCurrent } from '../../src/plating/partialCurrent';
 import { platingCurrent } from '../../src/plating/platingCurrent';
+import { thicknessFromMass } from '../../src/plating/thicknessFromMass';
 import { throwingPower } from '../../src/plating/throwingPower';
 import { type ArgSpec, domains, worksheet } from '../adapter';
 import { electrons, num, optNum } from '../args';
@@ -207,4 +208,17 @@ export const THROWINGPOWER = worksheet({
   result: 'Throwing power in %.',
   helpAnchor: 'throwingpower',
   compute: throwingPower,
+});
+
+export const THICKNESSFROMMASS = worksheet({
+  id: 'THICKNESSFROMMASS',
+  description: 'Average coating thickness, in µm, from the mass gained (or stripped) over an area and the coating\'s density: m/(ρ·A). Local thickness in recesses and on edges differs from the average.',
+  args: [
+    { ...num('mass_g', domains.nonNegative, 'g'), help: 'Mass of the coating (weight gain, or mass stripped), in g.' },
+    { ...num('area_dm2', domains.positive, 'dm²'), help: 'Coated area, in dm².' },
+    { ...num('density_g_cm3', domains.positive, 'g/cm³'), help: 'Density of the coating, in g/cm³.' },
+  ],
+  result: 'Thickness in µm.',
+  helpAnchor: 'thicknessfrommass',
+  compute: thicknessFromMass,
 });

@@ -96,4 +96,10 @@ describe('Hull cell, efficiency curve, shop arithmetic', () => {
     expect(r[3][0] as number).toBeGreaterThan(100);
     expect(isError(one(await run('THROWINGPOWER', 1, 2)), '#VALUE!')).toBe(true);
   });
+  it('THICKNESSFROMMASS on a column of weight gains (ASTM B767 §4.4: thickness from mass per area and density)', async () => {
+    const r = (await run('THICKNESSFROMMASS', [[1], [2]], 2, 8.908)) as number[][];
+    expect(r[0][0]).toBeCloseTo(5.613, 3); // 1 g / (8.908 g/cm³ · 200 cm²)
+    expect(r[1][0]).toBeCloseTo(2 * r[0][0], 12);
+    expect(isError(one(await run('THICKNESSFROMMASS', 1, 0, 8.908)))).toBe(true);
+  });
 });

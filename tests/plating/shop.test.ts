@@ -7,6 +7,7 @@ import { efficiencyCurve } from '../../src/plating/efficiencyCurve';
 import { hullCell } from '../../src/plating/hullCell';
 import { metalPerKAh } from '../../src/plating/metalPerKAh';
 import { platingCurrent } from '../../src/plating/platingCurrent';
+import { thicknessFromMass } from '../../src/plating/thicknessFromMass';
 import { throwingPower } from '../../src/plating/throwingPower';
 
 /** dm² per ft² (NIST SP 811: 1 ft = 0.3048 m exactly). */
@@ -96,5 +97,13 @@ describe('throwingPower, Haring–Blum cell: 100·(L − M)/(L + M − 2)', () =
   it('L ≤ 1, or M where the denominator vanishes, is refused', () => {
     expect(() => throwingPower(1, 2)).toThrow(/must be > 1/);
     expect(() => throwingPower(1.5, 0.5)).toThrow(/at or below 2 − L/);
+  });
+});
+
+describe('thicknessFromMass: h = m/(ρ·A)', () => {
+  it('the mass per unit area gives a thickness through the density (ASTM B767 §4.4): 1 g of nickel on 2 dm² is 5.613 µm', () => {
+    // 1 g / (8.908 g/cm³ · 200 cm²) = 5.6129e-4 cm
+    expect(thicknessFromMass(1, 2, 8.908)).toBeCloseTo(1e4 / (8.908 * 200), 12);
+    expect(thicknessFromMass(1, 2, 8.908)).toBeCloseTo(5.613, 3);
   });
 });
