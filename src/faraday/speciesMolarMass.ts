@@ -27,7 +27,15 @@ export function speciesMolarMass(species: string | number): number {
       `"${species.trim()}" reads as two elements (${meant.read}); did you mean ${meant.element}? Element symbols are case-sensitive: write "${meant.element}", or a molar mass in g/mol`,
     );
   }
-  return molarMass(species);
+  try {
+    return molarMass(species);
+  } catch (e) {
+    // "Zn0.86Ni0.14": every element with a count and some count a decimal is an alloy composition
+    if (e instanceof InputError && /^\s*(?:[A-Z][a-z]?\s*\d*\.?\d+\s*)+$/.test(species) && /\d\.\d/.test(species)) {
+      throw new InputError(`${e.message}; "${species.trim()}" looks like an alloy: give its equivalent weight, ALLOYEQUIV("Zn86Ni14", 2) (mass percent), as the molar mass with n = 1, or use ALLOYPLATETIME`);
+    }
+    throw e;
+  }
 }
 
 /**
