@@ -19,6 +19,8 @@ import { checkElsewhere } from './notices';
 import { builtin, model, CHECK_EVERY_MS, KINDS, ui } from './state';
 import { pollWhileVisible } from './visiblePolling';
 import { renderEph, wireEph } from './eph';
+import { renderConsistency } from './consistency';
+import { builtinTable } from '../src/table/builtin';
 import { buildTable } from '../src/table/table';
 import type { PotentialTable } from '../src/table/types';
 
@@ -64,6 +66,7 @@ export function renderAll(): void {
   renderInUse();
   for (const kind of KINDS) renderList(kind);
   renderEph();
+  if (ui.ready) renderConsistency(ephTable(), builtinTable());
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {
