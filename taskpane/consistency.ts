@@ -91,19 +91,40 @@ export function consistencyView(table: PotentialTable, builtin: PotentialTable):
   return view;
 }
 
+/** The table in use: undefined while the workbook is being read, null when its table cannot be read. */
+export type TableInUse = () => PotentialTable | null | undefined;
+
+let tableInUse: TableInUse = () => undefined;
+let builtinOf: () => PotentialTable = () => {
+  throw new Error('wireConsistency was not called');
+};
+
 /**
- * Fills the section #consistency-body; table undefined when the table in use cannot be read.
+ * Connects the section to the table in use; it is computed only while the section is open.
  *
- * @param table the table in use
+ * @param table the table in use (see TableInUse)
  * @param builtin the built-in table
  */
-export function renderConsistency(table: PotentialTable | undefined, builtin: PotentialTable): void {
+export function wireConsistency(table: TableInUse, builtin: () => PotentialTable): void {
+  tableInUse = table;
+  builtinOf = builtin;
+  byId('consistency').addEventListener('toggle', renderConsistency);
+}
+
+/** Fills the section #consistency-body when it is open (nothing is computed while it is closed). */
+export function renderConsistency(): void {
+  if (!byId<HTMLDetailsElement>('consistency').open) return;
   const body = byId('consistency-body');
+  const table = tableInUse();
   if (table === undefined) {
+    replace(body, h('p', { class: 'hint' }, 'Reading the workbook…'));
+    return;
+  }
+  if (table === null) {
     replace(body, h('p', { class: 'hint' }, 'The table in use cannot be read, so it cannot be checked.'));
     return;
   }
-  const { checked, items } = consistencyView(table, builtin);
+  const { checked, items } = consistencyView(table, builtinOf());
   const unexplained = items.filter((i) => i.note === null).length;
   const summary =
     items.length === 0
