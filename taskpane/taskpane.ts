@@ -19,6 +19,8 @@ import { checkElsewhere } from './notices';
 import { builtin, model, CHECK_EVERY_MS, KINDS, ui } from './state';
 import { pollWhileVisible } from './visiblePolling';
 import { renderEph, wireEph } from './eph';
+import { renderConsistency, wireConsistency } from './consistency';
+import { builtinTable } from '../src/table/builtin';
 import { buildTable } from '../src/table/table';
 import type { PotentialTable } from '../src/table/types';
 
@@ -64,6 +66,7 @@ export function renderAll(): void {
   renderInUse();
   for (const kind of KINDS) renderList(kind);
   renderEph();
+  renderConsistency();
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {
@@ -88,6 +91,7 @@ export function start(): void {
   wireEditors();
   wireFiles();
   wireEph(ephTable);
+  wireConsistency(() => (ui.ready ? (ephTable() ?? null) : undefined), builtinTable);
   if (typeof Office === 'undefined' || typeof Office.onReady !== 'function') {
     replace(byId('in-use-body'), h('p', {}, 'Office is not available here: open Cellwright from Excel.'));
     byId('app').setAttribute('aria-busy', 'false');

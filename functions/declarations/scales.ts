@@ -5,7 +5,7 @@
 import * as F from '../families/scales';
 
 /**
- * Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table's dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction from the species data with the filling's activity held constant. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.
+ * Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table's dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction (Ag/AgCl: measured by Bates & Bower; others: from the species data) with the filling's activity held constant. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.
  * @customfunction REFPOTENTIAL
  * @helpurl https://localhost:3000/docs/functions.html#refpotential
  * @param electrode Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).

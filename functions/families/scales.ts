@@ -15,7 +15,7 @@ const scaleArg = (name: string): ArgSpec => ({ name, kind: 'text' });
 
 export const REFPOTENTIAL = worksheet({
   id: 'REFPOTENTIAL',
-  description: 'Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table\'s dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction from the species data with the filling\'s activity held constant. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.',
+  description: 'Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table\'s dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction (Ag/AgCl: measured by Bates & Bower; others: from the species data) with the filling\'s activity held constant. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.',
   args: [
     { name: 'electrode', kind: 'electrode', help: 'Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).' },
     { ...temperatureC, help: 'Temperature in °C of the electrode (default 25; 0 to 100; saturated and field electrodes without dE/dT answer #N/A away from 25 °C).' },

@@ -90,30 +90,59 @@ export function consistencyReport(
     covered.add(row);
     lines.push(line('species', [row.key], row.e0, derived));
   }
+  // Rows by the species they hold (other than H+, OH- and H2O): a link or a cycle needs a shared one,
+  // so only rows sharing a species are compared (a table of thousands of rows stays fast).
+  const rows = table.couples;
+  const bySpecies = new Map<string, number[]>();
+  rows.forEach((row, i) => {
+    for (const k of new Set(row.parsed.species.map((t) => t.species.key))) {
+      if (WATER_IONS.has(k)) continue;
+      const list = bySpecies.get(k);
+      if (list === undefined) bySpecies.set(k, [i]);
+      else list.push(i);
+    }
+  });
+  const sharing = (i: number): number[] => {
+    const out = new Set<number>();
+    for (const t of rows[i].parsed.species) for (const j of bySpecies.get(t.species.key) ?? []) if (j !== i) out.add(j);
+    return [...out].sort((x, y) => x - y);
+  };
   const linked = new Set<string>();
-  for (const c of table.couples) {
-    if (covered.has(c)) continue;
-    for (const a of table.couples) {
-      if (a === c || linked.has(`${a.key}\u0000${c.key}`)) continue;
+  rows.forEach((c, ci) => {
+    if (covered.has(c)) return;
+    for (const ai of sharing(ci)) {
+      const a = rows[ai];
+      if (linked.has(`${a.key}\u0000${c.key}`)) continue;
       const g = differenceGibbsPerElectron(c, a);
       if (g === null) continue;
       linked.add(`${c.key}\u0000${a.key}`);
       lines.push(line('link', [c.key, a.key], c.e0, a.e0 - g / FARADAY_C_PER_MOL));
     }
-  }
-  const byVector = new Map<string, CoupleRow>();
-  for (const row of table.couples) byVector.set(textOf(vectorOf(row)), row);
-  const rows = table.couples;
-  for (let i = 0; i < rows.length; i++) {
-    for (let j = i + 1; j < rows.length; j++) {
-      const a = rows[i];
-      const b = rows[j];
-      const sum = vectorOf(a);
-      for (const [k, c] of vectorOf(b)) sum.set(k, (sum.get(k) ?? 0) + c);
-      const c = byVector.get(textOf(sum));
-      if (c === undefined || c === a || c === b || c.n !== a.n + b.n) continue;
-      lines.push(line('cycle', [c.key, a.key, b.key], c.e0, (a.n * a.e0 + b.n * b.e0) / c.n));
+  });
+  // Cycles C = A + B. Every C holds a species other than H+, OH- and H2O, which A or B must hold too,
+  // so A runs over the rows sharing a species with C and B is looked up as the vector C − A.
+  const vectors = rows.map(vectorOf);
+  const byVector = new Map<string, number>();
+  vectors.forEach((v, i) => byVector.set(textOf(v), i));
+  const cycles: Array<[number, number, number]> = [];
+  const seen = new Set<string>();
+  vectors.forEach((vc, ci) => {
+    if (byVector.get(textOf(vc)) !== ci) return;
+    for (const ai of sharing(ci)) {
+      const rest = new Map(vc);
+      for (const [k, x] of vectors[ai]) rest.set(k, (rest.get(k) ?? 0) - x);
+      const bi = byVector.get(textOf(rest));
+      if (bi === undefined || bi === ai || bi === ci || rows[ci].n !== rows[ai].n + rows[bi].n) continue;
+      const [i, j] = ai < bi ? [ai, bi] : [bi, ai];
+      if (seen.has(`${i} ${j}`)) continue;
+      seen.add(`${i} ${j}`);
+      cycles.push([i, j, ci]);
     }
+  });
+  cycles.sort((x, y) => x[0] - y[0] || x[1] - y[1]);
+  for (const [i, j, ci] of cycles) {
+    const [a, b, c] = [rows[i], rows[j], rows[ci]];
+    lines.push(line('cycle', [c.key, a.key, b.key], c.e0, (a.n * a.e0 + b.n * b.e0) / c.n));
   }
   return lines;
 }

@@ -866,4 +866,36 @@ export const tests = [
       await shot(page, '24-eph-unreadable-table', '#eph-figure');
     },
   },
+  {
+    name: 'Consistency: the built-in table’s differences over 5 mV with their explanations; an edited row without one',
+    async run({ open, shot }) {
+      const notes = JSON.parse(readFileSync(resolve(root, 'data/consistency.json'), 'utf8')).notes;
+      const page = await openPane(open);
+      await page.click('#consistency > summary');
+      await page.waitForSelector('#consistency-list li');
+      assert.match(await text(page, '#consistency-summary'), new RegExp(`^${Object.keys(notes).length} of \\d+ checks differ by more than 5 mV; each has an explanation on file\\.$`));
+      const items = await page.locator('#consistency-list > li').evaluateAll((lis) => lis.map((li) => li.textContent));
+      assert.equal(items.length, Object.keys(notes).length);
+      const li = items.find((t) => t.startsWith('Li+/Li against its species-derived E°'));
+      assert.ok(li.includes(notes['Li+/Li']), li);
+      assert.equal(await page.locator('#consistency-list .unexplained').count(), 0);
+      await fitsWidth(page);
+      await shot(page, '25-consistency-built-in', '#consistency');
+      // the workbook's copy with Cu2+/Cu at 0.40 V: reported against its species data, with no explanation
+      await page.fill('#filter-couple', 'Cu2+/Cu');
+      await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
+      await fill(page, 'couple', { e0: '0.40', source: 'edited for the test' });
+      await page.click('#save-couple');
+      await waitIdle(page);
+      await page.waitForFunction(() => /Cu2\+\/Cu against its species-derived E°/.test(document.getElementById('consistency-list')?.textContent ?? ''));
+      // two lines: the row against its species data, and the cycle Cu2+/Cu = Cu2+/Cu+ + Cu+/Cu
+      assert.match(await text(page, '#consistency-summary'), /2 without an explanation on file/);
+      assert.match(await text(page, '#consistency-list'), /Cu2\+\/Cu against Cu2\+\/Cu\+ and Cu\+\/Cu \(a cycle\)/);
+      const cu = (await page.locator('#consistency-list > li').evaluateAll((lis) => lis.map((x) => x.textContent))).find((t) => t.startsWith('Cu2+/Cu against its species-derived E°'));
+      // NBS 1982: ΔfG°(Cu2+) = 65.49 kJ/mol, E° = 65490/(2 × 96485.33212) = 0.3394 V; 0.40 V is +60.6 mV above it
+      assert.match(cu, /: \+60\.6 mV/);
+      assert.match(cu, /No explanation on file/);
+      await shot(page, '26-consistency-edited-row', '#consistency');
+    },
+  },
 ];

@@ -43,7 +43,7 @@ describe('the built-in couple table', () => {
   });
 
   it('holds the plating, refining and water-treatment couples', () => {
-    for (const key of ['Ag(CN)2-/Ag', 'Cu(CN)2-/Cu', 'Cu(CN)3^2-/Cu', 'Zn(OH)4^2-/Zn', 'HSnO2-/Sn', 'Sn(OH)6^2-/Sn', 'AuCl2-/Au', 'CuCl2-/Cu', 'O3/O2', 'ClO-/Cl-']) {
+    for (const key of ['Au(CN)2-/Au', 'AuCl4-/Au', 'Ag(CN)2-/Ag', 'Cu(CN)2-/Cu', 'Cu(CN)3^2-/Cu', 'Zn(OH)4^2-/Zn', 'HSnO2-/Sn', 'Sn(OH)6^2-/Sn', 'AuCl2-/Au', 'CuCl2-/Cu', 'O3/O2', 'ClO-/Cl-']) {
       expect(table.findCouple(key), key).toBeDefined();
     }
   });
@@ -66,6 +66,11 @@ describe('the built-in couple table', () => {
     expect(Math.abs(table.findCouple('AgCl/Ag')!.e0 - 0.22233)).toBeLessThan(0.001);
     expect(Math.abs(table.findCouple('AgBr/Ag')!.e0 - 0.07133)).toBeLessThan(0.001);
     expect(table.findCouple('H+/H2')!.e0).toBe(0); // definition of the SHE (IUPAC)
+    // NBS 1982 tables (NIST digital edition, stdprops-ml data/NBS_Tables.csv): ΔfG° Au(CN)2- 285.8, CN- 172.4,
+    // AuCl4- −235.14, Cl- −131.228 kJ/mol: E° = −(2·172.4 − 285.8)/F and (4·131.228 − 235.14)/(3F)
+    const F = 96485.33212;
+    expect(table.findCouple('Au(CN)2-/Au')!.e0).toBeCloseTo((-(2 * 172.4 - 285.8) * 1000) / F, 4);
+    expect(table.findCouple('AuCl4-/Au')!.e0).toBeCloseTo(((4 * 131.228 - 235.14) * 1000) / (3 * F), 4);
   });
 
   it('stores dE°/dT = ΔrS°/(nF) from the cited reaction enthalpies', () => {
