@@ -19,10 +19,11 @@ import { checkElsewhere } from './notices';
 import { builtin, model, CHECK_EVERY_MS, KINDS, ui } from './state';
 import { pollWhileVisible } from './visiblePolling';
 import { renderEph, wireEph } from './eph';
+import { renderLog, wireLog } from './logView';
 import { buildTable } from '../src/table/table';
 import type { PotentialTable } from '../src/table/types';
 
-export const TABS = ['couples', 'electrodes', 'files', 'eph', 'about'] as const;
+export const TABS = ['couples', 'electrodes', 'files', 'eph', 'log', 'about'] as const;
 
 export function selectTab(name: (typeof TABS)[number], focus: boolean): void {
   for (const t of TABS) {
@@ -64,6 +65,7 @@ export function renderAll(): void {
   renderInUse();
   for (const kind of KINDS) renderList(kind);
   renderEph();
+  renderLog();
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {
@@ -88,6 +90,7 @@ export function start(): void {
   wireEditors();
   wireFiles();
   wireEph(ephTable);
+  wireLog();
   if (typeof Office === 'undefined' || typeof Office.onReady !== 'function') {
     replace(byId('in-use-body'), h('p', {}, 'Office is not available here: open Cellwright from Excel.'));
     byId('app').setAttribute('aria-busy', 'false');

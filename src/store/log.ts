@@ -334,3 +334,23 @@ export function describeEntry(e: LogEntry, maxChars = Infinity): string[] {
   if (e.moreRows > 0) lines.push(`and ${e.moreRows.toLocaleString('en-US')} more row${e.moreRows === 1 ? '' : 's'} (not listed in the log)`);
   return lines;
 }
+
+/**
+ * The log as plain lines, newest entry first, for the CSV export's comment lines: a heading line,
+ * then per entry one line (revision, time, who, what, why) and one indented line per row.
+ *
+ * Syntax: logLines(log)
+ * Example: logLines(log)[1] → "Revision 2 at 2026-12-02T08:00:00.000Z by A. Tester: edited a row. Reason: new lab value"
+ */
+export function logLines(log: RevisionLog): string[] {
+  const n = log.entries.length;
+  const lines = [
+    `Revision log, newest first: ${n.toLocaleString('en-US')} entr${n === 1 ? 'y' : 'ies'}${log.dropped > 0 ? ` (${log.dropped.toLocaleString('en-US')} older entr${log.dropped === 1 ? 'y' : 'ies'} dropped to keep the log within its bounds)` : ''}.`,
+  ];
+  for (const e of [...log.entries].reverse()) {
+    const [action, ...rows] = describeEntry(e);
+    lines.push(`Revision ${e.revision} at ${e.at} by ${e.by}: ${action}. Reason: ${e.why}`);
+    for (const r of rows) lines.push(`  ${r}`);
+  }
+  return lines;
+}
