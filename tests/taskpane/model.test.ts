@@ -362,3 +362,60 @@ describe('copy to sheet', () => {
     expect(contentChecksum(a.copy!)).toBe(a.checksum);
   });
 });
+
+describe('revision log through the pane model', () => {
+  it('each write records who, when, why and the row’s old → new values; the log survives reopening', async () => {
+    const a = model();
+    await a.load();
+    expect((await a.pin({ by: 'Q. Engineer', why: 'freeze the data for the customer audit' })).kind).toBe('done');
+    const r = await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'our lab 2026' } }, { by: 'Q. Engineer', why: 'bath 4 measured value' });
+    expect(r.kind).toBe('done');
+    const b = model();
+    await b.load();
+    const log = b.copy!.log!;
+    expect(log.dropped).toBe(0);
+    expect(log.entries.map((e) => [e.revision, e.action, e.by, e.why, e.at])).toEqual([
+      [1, 'pin', 'Q. Engineer', 'freeze the data for the customer audit', '2026-03-04T05:06:07.000Z'],
+      [2, 'edit', 'Q. Engineer', 'bath 4 measured value', '2026-03-04T05:06:07.000Z'],
+    ]);
+    expect(log.entries[1].rows).toEqual([
+      { table: 'couples', key: 'Cu2+/Cu', change: 'changed', fields: [{ field: 'e0', from: cu().e0, to: 0.35 }, { field: 'source', from: cu().source, to: 'our lab 2026' }] },
+    ]);
+    // Copy to sheet writes the log after the rows, newest first, every text cell as text.
+    const c = sheetContent({ records: b.records, builtin: B, description: 'x', version: B.version, checksum: b.checksum!, now: new Date(0), log });
+    const head = c.values.findIndex((row) => row[0] === 'Revision log');
+    expect(c.values[head][1]).toBe('2 entries, newest first');
+    expect(c.values[head + 2].slice(0, 2)).toEqual([2, '2026-03-04T05:06:07.000Z']);
+    expect(c.values[head + 2][5]).toBe(`edited a row\ncouple Cu2+/Cu: E° ${cu().e0} V → 0.35 V; source “${cu().source}” → “our lab 2026”`);
+    expect(c.values[head + 2].slice(6)).toEqual(['bath 4 measured value', 'Q. Engineer']);
+    expect(c.values[head + 3][0]).toBe(1);
+    expect(c.formats[head + 2][6]).toBe('@');
+  });
+
+  it('a write without a reason or a name is refused and nothing is stored', async () => {
+    const a = model();
+    await a.load();
+    const r = await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' }, { by: 'Q. Engineer', why: '  ' });
+    expect(r.kind).toBe('refused');
+    expect(r.kind === 'refused' && r.message).toMatch(/give a reason/);
+    expect((await a.pin({ by: '', why: 'audit' })).kind).toBe('refused');
+    expect(file.settings.has(TABLE_SETTING_KEY)).toBe(false);
+  });
+
+  it('a change applied again after a conflict keeps its name and reason, and logs against the latest table', async () => {
+    const a = model();
+    const b = model();
+    await a.load();
+    await b.load();
+    expect((await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'pane A' } }, { by: 'A', why: 'first' })).kind).toBe('done');
+    const r = await b.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'pane B' } }, { by: 'B', why: 'second' });
+    expect(r.kind).toBe('conflict');
+    if (r.kind !== 'conflict') return;
+    expect((await r.retry!()).kind).toBe('done');
+    const log = b.copy!.log!;
+    expect(log.entries.map((e) => [e.revision, e.by, e.why, e.rows.map((x) => x.key)])).toEqual([
+      [1, 'A', 'first', ['Cu2+/Cu']],
+      [2, 'B', 'second', ['Ag+/Ag']],
+    ]);
+  });
+});
