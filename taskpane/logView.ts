@@ -15,6 +15,8 @@ export function renderLog(): void {
   const summary = byId('log-summary');
   const list = byId('log-list');
   const copy = byId<HTMLButtonElement>('log-copy-sheet');
+  const name = byId<HTMLInputElement>('log-name');
+  if (document.activeElement !== name) name.value = rememberedName();
   const st = model.state;
   copy.disabled = !ui.ready || st.kind !== 'readable';
   if (st.kind !== 'readable') {

@@ -942,7 +942,8 @@ export const tests = [
       await labelled(page);
       await fitsWidth(page);
       await shot(page, '26-revision-log', '#panel-log');
-      // The name can be changed later; the next change records the new one.
+      // The name given once shows here and can be changed later.
+      assert.equal(await page.inputValue('#log-name'), 'Q. Engineer');
       await page.fill('#log-name', 'Q. Engineer (QA)');
       await page.click('#log-name-save');
       assert.match(await text(page, '#log-name-status'), /recorded as Q\. Engineer \(QA\)/);
