@@ -13,6 +13,7 @@ import { exportCsv, importCsv } from '../../src/store/csv';
 import { type VersionedRecords } from '../../src/store/rows';
 import { contentChecksum, forgetLastRead, writeSchema1Text, writeStoredText } from '../../src/store/stored';
 import { pinnedCopy } from '../../src/store/copy';
+import { type RevisionLog, logChecksum } from '../../src/store/log';
 import { TableModel } from '../../taskpane/model';
 import { copyToSheet, sheetContent } from '../../taskpane/sheet';
 
@@ -158,6 +159,15 @@ describe('damaged data and checksum mismatch', () => {
     ['someone else\'s value', () => 'hello', /not valid JSON|not written by Cellwright/],
     // A number beyond double range (JSON reads it as Infinity) and 20,000-deep nesting, behind a stale checksum.
     ['a number beyond double range', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', '"e0":1e999'), /"e0" is not a finite number/],
+    // A log entry whose reason was emptied, its log checksum recomputed so the entry check itself is reached.
+    ['a damaged revision log entry', () => {
+      const log: RevisionLog = { entries: [{ revision: 1, at: '2026-01-01T00:00:00.000Z', by: 'A', why: 'pin', action: 'pin', basedOn: B.version, rows: [], moreRows: 0 }], dropped: 0 };
+      const doc = JSON.parse(writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z', log }));
+      doc.log.entries[0].why = '';
+      doc.logChecksum = logChecksum(doc.log);
+      return JSON.stringify(doc);
+    }, /revision log is damaged: entry 1: "why" is not a reason/],
+    ['a revision log changed behind its checksum', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z', log: { entries: [], dropped: 0 } }).replace('"dropped":0', '"dropped":7'), /revision log does not match its checksum/],
     ['a field nested 20,000 deep', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', `"e0":${'['.repeat(20_000)}0.3372${']'.repeat(20_000)}`), /"e0" is not a finite number/],
   ];
   for (const [name, value, reason] of damaged) {
