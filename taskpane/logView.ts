@@ -34,7 +34,7 @@ export function renderLog(): void {
   const parts = [`${plural(n, 'entry', 'entries')}, newest first. The log keeps the newest ${MAX_LOG_ENTRIES.toLocaleString('en-US')} entries.`];
   if (log.dropped > 0) parts.push(`${plural(log.dropped, 'older entry', 'older entries')} ${log.dropped === 1 ? 'was' : 'were'} dropped to keep it within its bounds.`);
   const first = log.entries[0]?.revision ?? st.read.copy.revision + 1;
-  if (log.dropped === 0 && first > 1) parts.push(`Revisions 1 to ${first - 1} were made before this workbook’s table kept a log.`);
+  if (log.dropped === 0 && first > 1) parts.push(`${first === 2 ? 'Revision 1 was' : `Revisions 1 to ${first - 1} were`} made before this workbook’s table kept a log.`);
   if (n === 0) parts.push('The next change you save starts it.');
   replace(summary, parts.join(' '));
   const shown = [...log.entries].reverse().slice(0, MAX_SHOWN);
