@@ -21,6 +21,8 @@
  *          --min                report the fastest run instead of the median (for A/B comparisons
  *                               of code on a busy machine: the fastest run is the least disturbed)
  * Environment: CELLWRIGHT_DIST  another build directory (default dist/)
+ *              CELLWRIGHT_BENCH_LOG_ENTRIES  revision-log entries of the cold-store table (default 500;
+ *                               0 measures the same table without a log)
  *
  * A function that does not exist in the bundle yet is reported as "not yet available".
  */
@@ -697,27 +699,47 @@ function coldChild(what) {
 }
 
 /**
- * A workbook with its own 2,000-row table: the stored text is made first (not timed), then the
- * bundle is evaluated with an Office global (so that it opens its workbook channel, as in Excel's
- * shared runtime) and the stored text is handed to it the way the pane and the start-up read do
- * (cellwrightFunctionsHost.useStoredValue: parse, checksum, every row checked, table built), then
- * the first table look-up answers.
+ * A workbook with its own table of 2,000 user rows (beside the built-in rows) and a revision log of
+ * 500 entries: the stored text is made first (not timed), then the bundle is evaluated with an Office
+ * global (so that it opens its workbook channel, as in Excel's shared runtime) and the stored text is
+ * handed to it the way the pane and the start-up read do (cellwrightFunctionsHost.useStoredValue:
+ * parse, both checksums, every row and every log entry checked, table built), then the first table
+ * look-up answers. Each log entry is a typical edit: one row's E° and source changed, a reason of
+ * about 60 characters.
  */
 async function coldStore() {
   const { pinnedCopy } = requireTs('src/store/copy.ts');
   const { recordsOf } = requireTs('src/store/rows.ts');
   const { writeStoredText } = requireTs('src/store/stored.ts');
+  const { EMPTY_LOG, appendEntry } = requireTs('src/store/log.ts');
   const { builtinTable } = requireTs('src/table/builtin.ts');
   const pinned = pinnedCopy(recordsOf(builtinTable()));
-  const extra = syntheticRecords(2000 - pinned.couples.length - pinned.electrodes.length);
+  const extra = syntheticRecords(2000);
+  let log = EMPTY_LOG;
+  const entries = Number(process.env.CELLWRIGHT_BENCH_LOG_ENTRIES ?? 500);
+  for (let i = 0; i < entries; i++) {
+    const r = extra[(i * 37) % extra.length];
+    log = appendEntry(log, {
+      revision: i + 1,
+      at: new Date(Date.UTC(2026, 0, 1) + i * 3_600_000).toISOString(),
+      by: i % 3 === 0 ? 'Q. Engineer' : 'P. Operator',
+      why: `re-measured on plating line ${(i % 7) + 1} after the monthly calibration check`,
+      action: 'edit',
+      basedOn: pinned.basedOn,
+      rows: [{ table: 'couples', key: r.key, change: 'changed', fields: [{ field: 'e0', from: r.e0, to: r.e0 + 0.001 }, { field: 'source', from: r.source, to: `Plant QA measurement ${i + 1}` }] }],
+      moreRows: 0,
+    });
+  }
   const copy = {
     ...pinned,
-    revision: 1,
+    revision: 500,
     changedAt: '2026-12-01T00:00:00.000Z',
     couples: [...pinned.couples, ...extra],
     own: { couples: extra.map((r) => r.key), electrodes: [] },
+    log,
   };
   const text = writeStoredText(copy);
+  const logChars = JSON.stringify(log).length;
   const office = {
     Office: { onReady: () => Promise.resolve({ host: 'Word' }), HostType: { Excel: 'Excel' }, context: { requirements: { isSetSupported: () => true } } },
     setTimeout,
@@ -736,7 +758,7 @@ async function coldStore() {
   const v = await fns.get('STDPOTENTIAL')(cell(extra[extra.length - 1].key), null, INVOCATION);
   const t4 = now();
   if (status.state !== 'workbook' || typeof v?.[0]?.[0] !== 'number') throw new Error(`the stored table was not used: ${JSON.stringify(status)} ${JSON.stringify(v)}`);
-  return { rows: status.couples + status.electrodes, chars: text.length, evalRegisterMs: t1 - t0, readMs: t3 - t2, firstAnswerMs: t4 - t3 };
+  return { rows: status.couples + status.electrodes, chars: text.length, logEntries: log.entries.length, logChars, evalRegisterMs: t1 - t0, readMs: t3 - t2, firstAnswerMs: t4 - t3 };
 }
 
 function coldStart() {
@@ -780,9 +802,9 @@ function coldStart() {
     const readMs = median(st.map((x) => x.readMs));
     const firstMs = median(st.map((x) => x.firstAnswerMs));
     const evalMs = median(st.map((x) => x.evalRegisterMs));
-    results.push({ name: 'cold-store', rows: st[0].rows, chars: st[0].chars, evalRegisterMs: evalMs, readMs, firstAnswerMs: firstMs });
+    results.push({ name: 'cold-store', rows: st[0].rows, chars: st[0].chars, logEntries: st[0].logEntries, logChars: st[0].logChars, evalRegisterMs: evalMs, readMs, firstAnswerMs: firstMs });
     console.log(
-      `${'cold-store'.padEnd(18)} a workbook with its own ${st[0].rows}-row table (${(st[0].chars / 1024).toFixed(0)} KB stored): evaluate + register ${evalMs.toFixed(1)} ms, read + validate + build the table ${readMs.toFixed(1)} ms, first look-up ${firstMs.toFixed(1)} ms (fresh process)`,
+      `${'cold-store'.padEnd(18)} a workbook with its own ${st[0].rows}-row table and a ${st[0].logEntries}-entry log (${(st[0].chars / 1024).toFixed(0)} KB stored, the log ${(st[0].logChars / 1024).toFixed(0)} KB): evaluate + register ${evalMs.toFixed(1)} ms, read + validate + build the table ${readMs.toFixed(1)} ms, first look-up ${firstMs.toFixed(1)} ms (fresh process)`,
     );
   } catch (e) {
     console.log(`${'cold-store'.padEnd(18)} failed: ${e.message.split('\n')[0]}`);

@@ -20,3 +20,7 @@ export const MAX_SOURCE_CHARS = 1000;
 export const MAX_NOTE_CHARS = 2000;
 /** A version of the built-in table ("2026.1"). */
 export const MAX_VERSION_CHARS = 20;
+/** The name a person gives for the revision log ("A. Tester"). */
+export const MAX_PERSON_CHARS = 100;
+/** The reason a person gives for a change, recorded in the revision log. */
+export const MAX_REASON_CHARS = 500;

@@ -6,6 +6,7 @@ import { byId, replace } from './dom';
 import { type CoupleFields, type ElectrodeFields, checkCoupleForm, checkElectrodeForm } from './forms';
 import { renderList, focusRowButton } from './lists';
 import { act } from './notices';
+import { type SignoffControl, mountSignoff } from './signoff';
 import { model, KINDS, noun, ui } from './state';
 
 export const COUPLE_FIELDS: readonly (keyof CoupleFields)[] = ['halfReaction', 'key', 'e0', 'dEdT', 'source', 'note'];
@@ -80,6 +81,7 @@ export function openEditor(kind: RowKind, originalKey: string | null): void {
         ? { key: rec.key, halfReaction: (rec as CoupleRecord).halfReaction, e0: String((rec as CoupleRecord).e0), dEdT: rec.dEdT_mV_K === undefined ? '' : String(rec.dEdT_mV_K), source: rec.source, note: rec.note ?? '' }
         : { key: rec.key, aliases: (rec as ElectrodeRecord).aliases.join('\n'), potential: String((rec as ElectrodeRecord).potential), dEdT: rec.dEdT_mV_K === undefined ? '' : String(rec.dEdT_mV_K), source: rec.source, note: rec.note ?? '' };
   for (const f of fieldsOf(kind)) input(kind, f).value = values[f] ?? '';
+  signoffs[kind]?.reset();
   replace(byId(`f-${kind}-form-error`), '');
   form.hidden = false;
   showChecks(kind);
@@ -105,8 +107,14 @@ export async function saveEditor(kind: RowKind): Promise<void> {
     if (first !== undefined) input(kind, first).focus();
     return;
   }
+  const signoff = signoffs[kind]?.value() ?? null;
+  if (signoff === null) {
+    replace(byId(`f-${kind}-form-error`), 'Not saved: give a reason for the change (and your name, if asked).');
+    signoffs[kind]?.focus();
+    return;
+  }
   const change: TableChange = { kind: 'put', rowKind: kind, originalKey: ed.originalKey, record: c.record };
-  const r = await act(() => model.change(change));
+  const r = await act(() => model.change(change, signoff));
   if (r === null) return;
   if (r.kind === 'done') {
     closeEditor(kind, c.record.key);
@@ -117,9 +125,15 @@ export async function saveEditor(kind: RowKind): Promise<void> {
   }
 }
 
+/** The who-and-why fields of each form (Save stays disabled until a reason is given). */
+const signoffs: Record<RowKind, SignoffControl | null> = { couple: null, electrode: null };
+
 export function wireEditors(): void {
   for (const kind of KINDS) {
     const form = byId<HTMLFormElement>(`editor-${kind}`);
+    signoffs[kind] = mountSignoff(byId(`f-${kind}-signoff`), `f-${kind}`, (valid) => {
+      byId<HTMLButtonElement>(`save-${kind}`).disabled = !valid;
+    });
     form.addEventListener('submit', (e) => {
       e.preventDefault();
       void saveEditor(kind);

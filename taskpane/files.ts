@@ -2,9 +2,10 @@
 import { type TableChange, applyChange } from '../src/store/copy';
 import { type CsvImport, MAX_CSV_BYTES, exportCsv, importCsv } from '../src/store/csv';
 import { diffTables } from '../src/store/diff';
+import { logLines } from '../src/store/log';
 import { type Child, byId, clear, h, replace } from './dom';
 import { plural } from './format';
-import { showNotice, showProblem, confirmAction, act } from './notices';
+import { showNotice, showProblem, confirmSigned, act } from './notices';
 import { copyToSheet } from './sheet';
 import { wireVerification } from './verification';
 import { builtin, model, ui } from './state';
@@ -29,7 +30,8 @@ export function download(text: string, filename: string, type: string): void {
 }
 
 export function csvOfTable(): string {
-  return exportCsv(model.records, `${describeInUse()}; checksum ${model.checksum ?? ''}; exported ${new Date().toISOString()}.`);
+  const log = model.copy?.log;
+  return exportCsv(model.records, `${describeInUse()}; checksum ${model.checksum ?? ''}; exported ${new Date().toISOString()}.`, log === undefined ? [] : logLines(log));
 }
 
 export function exportDownload(): void {
@@ -120,17 +122,20 @@ export function runImportCheck(): void {
 export async function doImport(skipRejected: boolean): Promise<void> {
   const chk = ui.importCheck;
   if (chk === null) return;
-  if (chk.mode === 'replace') {
-    const ok = await confirmAction({
-      title: 'Replace the whole table?',
-      body: [`The table becomes the ${plural(chk.result.accepted.length, 'imported row')}; every other row is removed from this workbook’s table.`],
-      ok: 'Replace',
-      danger: true,
-    });
-    if (!ok) return;
-  }
   if (skipRejected && chk.result.rejected.length === 0) return;
-  const r = await act(() => model.change(importChange(chk.result, chk.mode)));
+  const n = plural(chk.result.accepted.length, 'row');
+  const signoff = await confirmSigned(
+    chk.mode === 'replace'
+      ? {
+          title: 'Replace the whole table?',
+          body: [`The table becomes the ${plural(chk.result.accepted.length, 'imported row')}; every other row is removed from this workbook’s table.`],
+          ok: 'Replace',
+          danger: true,
+        }
+      : { title: `Import ${n}?`, body: [`The ${n} are added to this workbook’s table, or replace the rows with the same keys; other rows stay.`], ok: 'Import' },
+  );
+  if (signoff === null) return;
+  const r = await act(() => model.change(importChange(chk.result, chk.mode), signoff));
   if (r?.kind === 'done') {
     ui.importCheck = null;
     clear(byId('import-report'));
@@ -166,6 +171,7 @@ export async function copySheet(): Promise<void> {
       version: versionInUse(),
       checksum: model.checksum ?? '',
       now: new Date(),
+      ...(model.copy?.log === undefined ? {} : { log: model.copy.log }),
     });
     showNotice(`Copied the table to the new sheet “${name}”.`);
   } catch (e) {

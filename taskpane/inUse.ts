@@ -3,7 +3,7 @@ import { describeDifference } from '../src/store/diff';
 import { type Child, byId, h, replace } from './dom';
 import { download } from './files';
 import { when, plural } from './format';
-import { clearMessages, confirmAction, act } from './notices';
+import { clearMessages, confirmAction, confirmSigned, act } from './notices';
 import { builtin, model, ui } from './state';
 import { renderAll } from './taskpane';
 
@@ -50,7 +50,7 @@ export function renderInUse(): void {
       h(
         'div',
         { class: 'actions' },
-        h('button', { type: 'button', id: 'pin', class: 'primary', 'aria-describedby': 'pin-hint', onclick: () => void act(() => model.pin()) }, 'Pin to this workbook'),
+        h('button', { type: 'button', id: 'pin', class: 'primary', 'aria-describedby': 'pin-hint', onclick: () => void pinTable() }, 'Pin to this workbook…'),
       ),
       h('p', { class: 'hint', id: 'pin-hint' }, 'Stores the built-in table in this workbook, so later add-in updates do not change its results. Editing a row does the same.'),
       functionsLine(),
@@ -158,6 +158,7 @@ export async function resetTable(): Promise<void> {
       ? ['The workbook’s stored table cannot be read. Resetting removes it for good and the worksheet functions use the add-in’s built-in table again.', 'Download the stored text first if you may need it.']
       : [
           'This removes the workbook’s own table. The worksheet functions then use the add-in’s built-in table, which can change when the add-in is updated.',
+          'The table’s revision log is removed with it: copy the table and its log to a sheet first (Log tab) if you need them.',
           diffs.length === 0 ? 'No row differs from the built-in table.' : `${plural(diffs.length, 'row')} that ${diffs.length === 1 ? 'differs' : 'differ'} from the built-in table will be lost:`,
         ],
     list: unreadable ? [] : diffs.map(describeDifference),
@@ -170,11 +171,20 @@ export async function resetTable(): Promise<void> {
 export async function updateToBuiltin(): Promise<void> {
   const notice = model.builtinNotice();
   if (notice === null) return;
-  const ok = await confirmAction({
+  const signoff = await confirmSigned({
     title: `Update to built-in ${notice.builtin}?`,
     body: ['Rows added, edited or deleted in this workbook stay as they are. These rows change:'],
     list: notice.changes.map(describeDifference),
     ok: 'Update',
   });
-  if (ok) await act(() => model.change({ kind: 'update-to-builtin' }));
+  if (signoff !== null) await act(() => model.change({ kind: 'update-to-builtin' }, signoff));
+}
+
+export async function pinTable(): Promise<void> {
+  const signoff = await confirmSigned({
+    title: `Pin the built-in table ${builtin.version} to this workbook?`,
+    body: ['The workbook keeps its own copy of the table, so later add-in updates do not change its results. Its revision log starts with this entry.'],
+    ok: 'Pin',
+  });
+  if (signoff !== null) await act(() => model.pin(signoff));
 }

@@ -5,7 +5,7 @@ import { type CoupleRecord, type ElectrodeRecord } from '../src/table/records';
 import { byId, clear, h, replace } from './dom';
 import { openEditor } from './editors';
 import { signed, plural, electronsOf, fieldLabel } from './format';
-import { confirmAction, act } from './notices';
+import { confirmSigned, act } from './notices';
 import { builtin, model, MAX_SHOWN, noun, ui } from './state';
 
 export function matches(kind: RowKind, r: AnyRecord, filter: string): boolean {
@@ -118,7 +118,7 @@ export function focusRowButton(kind: RowKind, key: string | null, cls = 'edit'):
 
 export async function deleteRow(kind: RowKind, key: string): Promise<void> {
   const inBuiltin = rowsOf(builtin, kind).some((r) => matchKey(kind, r.key) === matchKey(kind, key));
-  const ok = await confirmAction({
+  const signoff = await confirmSigned({
     title: `Delete ${key}?`,
     body: [
       `Cells that use the ${noun(kind)} ${key} will show #N/A.`,
@@ -127,11 +127,11 @@ export async function deleteRow(kind: RowKind, key: string): Promise<void> {
     ok: 'Delete',
     danger: true,
   });
-  if (!ok) return;
+  if (signoff === null) return;
   const rows = rowsOf(model.records, kind);
   const i = rows.findIndex((r) => matchKey(kind, r.key) === matchKey(kind, key));
   const next = rows[i + 1]?.key ?? rows[i - 1]?.key ?? null;
-  const r = await act(() => model.change({ kind: 'delete', rowKind: kind, key }));
+  const r = await act(() => model.change({ kind: 'delete', rowKind: kind, key }, signoff));
   if (r?.kind === 'done') focusRowButton(kind, next);
 }
 
@@ -141,13 +141,13 @@ export async function revertRow(kind: RowKind, key: string): Promise<void> {
   const current = rowsOf(model.records, kind).find((r) => matchKey(kind, r.key) === matchKey(kind, key));
   const one = (r: AnyRecord) => (kind === 'couple' ? { couples: [r as CoupleRecord], electrodes: [] } : { couples: [], electrodes: [r as ElectrodeRecord] });
   const change = current === undefined ? [] : diffTables(one(current), one(b));
-  const ok = await confirmAction({
+  const signoff = await confirmSigned({
     title: current === undefined ? `Restore ${key}?` : `Revert ${key} to the built-in value?`,
     body: [current === undefined ? `The built-in row ${key} comes back with its built-in values.` : 'The row takes the built-in table’s values again:'],
     list: change.map(describeDifference),
     ok: current === undefined ? 'Restore' : 'Revert',
   });
-  if (!ok) return;
-  const r = await act(() => model.change({ kind: 'revert', rowKind: kind, key }));
+  if (signoff === null) return;
+  const r = await act(() => model.change({ kind: 'revert', rowKind: kind, key }, signoff));
   if (r?.kind === 'done') focusRowButton(kind, key);
 }

@@ -13,6 +13,7 @@
 import { type TableChange, type WorkbookCopy, ChangeError, applyChange, pinnedCopy } from '../src/store/copy';
 import { type RowDifference, describeDifference, diffTables } from '../src/store/diff';
 import { type TableRecords, type VersionedRecords, cleanRecord, matchKey, rowsOf, sameRecord } from '../src/store/rows';
+import { type LogAction, type Signoff } from '../src/store/log';
 import { builtinChecksum } from '../src/store/stored';
 import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../workbook/channel';
 import { type StoredState, type WriteOutcome, computedWithOf, readStoredValue, interpret, recalculateAll, removeTable, sameStoredValue, writeCopy } from '../workbook/store';
@@ -57,7 +58,7 @@ const EMPTY: TableRecords = { couples: [], electrodes: [] };
 
 export class TableModel {
   state: StoredState = { kind: 'none', raw: null };
-  private lastChange: { change: TableChange; mine: readonly RowDifference[]; written: string } | null = null;
+  private lastChange: { change: TableChange; signoff: Signoff; mine: readonly RowDifference[]; written: string } | null = null;
 
   constructor(private readonly deps: ModelDeps) {}
 
@@ -155,13 +156,13 @@ export class TableModel {
     return this.state.raw;
   }
 
-  private async afterWrite(outcome: WriteOutcome, done: string, change: TableChange | null, before: TableRecords): Promise<ActionResult> {
+  private async afterWrite(outcome: WriteOutcome, done: string, change: TableChange | null, signoff: Signoff | null, before: TableRecords): Promise<ActionResult> {
     const previous = this.state;
     this.state = outcome.state;
     if (outcome.kind === 'written') {
       this.lastChange = change === null || typeof outcome.state.raw !== 'string'
         ? null
-        : { change, mine: diffTables(before, this.records), written: outcome.state.raw };
+        : { change, signoff: signoff!, mine: diffTables(before, this.records), written: outcome.state.raw };
       const warning = await this.syncFunctions(true);
       return { kind: 'done', message: done, ...(warning === undefined ? {} : { warning }) };
     }
@@ -175,7 +176,7 @@ export class TableModel {
       kind: 'conflict',
       message: `${what}: ${why}. ${this.describeState()}`,
       theirs,
-      ...(change === null ? {} : { retry: () => this.change(change) }),
+      ...(change === null || signoff === null ? {} : { retry: () => this.change(change, signoff) }),
     };
   }
 
@@ -195,8 +196,11 @@ export class TableModel {
     };
   }
 
-  /** Applies a change to the table in use (making the workbook's own copy if it has none yet) and stores it. */
-  async change(change: TableChange): Promise<ActionResult> {
+  /**
+   * Applies a change to the table in use (making the workbook's own copy if it has none yet) and stores
+   * it, with an entry in the revision log saying who made it and why (both required).
+   */
+  async change(change: TableChange, signoff: Signoff): Promise<ActionResult> {
     const refused = this.refuseUnreadable();
     if (refused) return refused;
     const before = this.records;
@@ -208,23 +212,29 @@ export class TableModel {
       throw e;
     }
     try {
-      const outcome = await writeCopy(next, this.seen(), this.deps.builtin, this.now());
-      return this.afterWrite(outcome, capital(describeChange(change)), change, before);
+      const outcome = await writeCopy(next, this.seen(), this.deps.builtin, { ...signoff, action: actionOf(change) }, this.now());
+      return this.afterWrite(outcome, capital(describeChange(change)), change, signoff, before);
     } catch (e) {
       if (e instanceof ChangeError) return { kind: 'refused', message: capital(e.message), details: [...e.details] };
       throw e;
     }
   }
 
-  /** Writes the add-in's built-in table into the workbook, so later add-in updates do not change its results. */
-  async pin(): Promise<ActionResult> {
+  /** Writes the add-in's built-in table into the workbook, so later add-in updates do not change its results; the log starts with it. */
+  async pin(signoff: Signoff): Promise<ActionResult> {
     const refused = this.refuseUnreadable();
     if (refused) return refused;
     if (this.state.kind === 'readable') {
       return { kind: 'refused', message: 'This workbook already has its own table; its results do not change when the add-in is updated.', details: [] };
     }
-    const outcome = await writeCopy(pinnedCopy(this.deps.builtin), this.seen(), this.deps.builtin, this.now());
-    return this.afterWrite(outcome, `Pinned: the built-in table ${this.deps.builtin.version} is now stored in this workbook.`, null, this.records);
+    let outcome: WriteOutcome;
+    try {
+      outcome = await writeCopy(pinnedCopy(this.deps.builtin), this.seen(), this.deps.builtin, { ...signoff, action: 'pin' }, this.now());
+    } catch (e) {
+      if (e instanceof ChangeError) return { kind: 'refused', message: capital(e.message), details: [...e.details] };
+      throw e;
+    }
+    return this.afterWrite(outcome, `Pinned: the built-in table ${this.deps.builtin.version} is now stored in this workbook.`, null, null, this.records);
   }
 
   /** Removes the workbook's table (readable or not), so the built-in table is used again. */
@@ -232,7 +242,7 @@ export class TableModel {
     if (this.state.kind === 'none') return { kind: 'refused', message: 'The workbook has no table of its own; the built-in table is already in use.', details: [] };
     const before = this.records;
     const outcome = await removeTable(this.seen(), this.deps.builtin);
-    return this.afterWrite(outcome, `Reset: the workbook’s own table was removed; the built-in table ${this.deps.builtin.version} is in use.`, null, before);
+    return this.afterWrite(outcome, `Reset: the workbook’s own table was removed; the built-in table ${this.deps.builtin.version} is in use.`, null, null, before);
   }
 
   /**
@@ -255,13 +265,14 @@ export class TableModel {
     }
     this.lastChange = null;
     const change = last?.change;
+    const signoff = last?.signoff;
     return {
       message: lostMine
         ? `Your last change (${describeChange(last!.change)}) is no longer in the workbook’s table: another pane wrote over it. ${this.describeState()}`
         : `The workbook’s table was changed elsewhere. ${this.describeState()}`,
       theirs,
       lostMine,
-      ...(lostMine && change !== undefined ? { retry: () => this.change(change) } : {}),
+      ...(lostMine && change !== undefined && signoff !== undefined ? { retry: () => this.change(change, signoff) } : {}),
     };
   }
 
@@ -281,6 +292,22 @@ function holds(t: TableRecords, d: RowDifference): boolean {
 
 function capital(s: string): string {
   return s.length === 0 ? s : s[0].toUpperCase() + s.slice(1) + (/[.!?]$/.test(s) ? '' : '.');
+}
+
+/** The word the revision log records for a change. */
+export function actionOf(c: TableChange): LogAction {
+  switch (c.kind) {
+    case 'put':
+      return c.originalKey === null ? 'add' : 'edit';
+    case 'delete':
+      return 'delete';
+    case 'revert':
+      return 'revert';
+    case 'import':
+      return c.mode === 'merge' ? 'import-merge' : 'import-replace';
+    case 'update-to-builtin':
+      return 'update';
+  }
 }
 
 /** A change in a few words, for messages: "saved couple Cu2+/Cu". */

@@ -4,6 +4,8 @@ import { byId, clear, h, replace } from './dom';
 import { type ActionResult } from './model';
 import { model, ui } from './state';
 import { renderAll } from './taskpane';
+import { type Signoff } from '../src/store/log';
+import { type SignoffControl, mountSignoff } from './signoff';
 
 export interface NoticeAction {
   readonly label: string;
@@ -42,8 +44,26 @@ export interface ConfirmOptions {
   readonly danger?: boolean;
 }
 
-/** A modal confirmation (native <dialog>: focus stays inside, Escape cancels). */
-export function confirmAction(o: ConfirmOptions): Promise<boolean> {
+/**
+ * A confirmation that also asks who and why for the revision log (OK stays disabled until a reason is
+ * given): the signoff, or null when cancelled.
+ */
+export async function confirmSigned(o: ConfirmOptions): Promise<Signoff | null> {
+  let control: SignoffControl | null = null;
+  const ok = await confirmAction(o, (box, okButton) => {
+    control = mountSignoff(box, 'confirm', (valid) => {
+      okButton.disabled = !valid;
+    });
+    return () => control?.focus();
+  });
+  return ok && control !== null ? (control as SignoffControl).value() : null;
+}
+
+/**
+ * A modal confirmation (native <dialog>: focus stays inside, Escape cancels). `extra` fills the space
+ * below the text (the signoff fields) and returns what focuses it.
+ */
+export function confirmAction(o: ConfirmOptions, extra?: (box: HTMLElement, ok: HTMLButtonElement) => () => void): Promise<boolean> {
   const dialog = byId<HTMLDialogElement>('confirm');
   const ok = byId<HTMLButtonElement>('confirm-ok');
   const cancel = byId<HTMLButtonElement>('confirm-cancel');
@@ -57,12 +77,19 @@ export function confirmAction(o: ConfirmOptions): Promise<boolean> {
   );
   replace(ok, o.ok);
   ok.className = o.danger ? 'primary danger-fill' : 'primary';
+  ok.disabled = false;
+  const box = byId('confirm-extra');
+  clear(box);
+  const focusExtra = extra?.(box, ok);
   return new Promise((resolve) => {
     const finish = (answer: boolean) => {
+      if (answer && ok.disabled) return;
       ok.removeEventListener('click', onOk);
       cancel.removeEventListener('click', onCancel);
       dialog.removeEventListener('cancel', onEscape);
       if (dialog.open) dialog.close();
+      ok.disabled = false;
+      clear(box);
       opener?.focus();
       resolve(answer);
     };
@@ -76,7 +103,8 @@ export function confirmAction(o: ConfirmOptions): Promise<boolean> {
     cancel.addEventListener('click', onCancel);
     dialog.addEventListener('cancel', onEscape);
     dialog.showModal();
-    (o.danger ? cancel : ok).focus();
+    if (focusExtra !== undefined) focusExtra();
+    else (o.danger ? cancel : ok).focus();
   });
 }
 

@@ -3,12 +3,17 @@
  * description, version, checksum and every row's source. The worksheet functions never read this sheet;
  * it is a copy for people.
  *
- * Every text cell gets the Text number format ("@") before its value is written, so a key, source or
- * note that starts with "=" stays text and is never turned into a formula.
+ * Every text cell gets the Text number format ("@") before its value is written, so a key, source,
+ * note, name or reason that starts with "=" stays text and is never turned into a formula.
+ *
+ * The workbook's revision log follows the rows, newest entry first: revision, time (UTC), what was
+ * done (the action and one line per row), why, and who.
  */
 import { type RowDifference, diffTables } from '../src/store/diff';
 import { type TableRecords, type VersionedRecords, matchKey } from '../src/store/rows';
 import { buildTable } from '../src/table/table';
+import { type RevisionLog, describeEntry } from '../src/store/log';
+import { plural } from './format';
 
 export interface SheetCopyInput {
   readonly records: TableRecords;
@@ -18,6 +23,8 @@ export interface SheetCopyInput {
   readonly version: string;
   readonly checksum: string;
   readonly now: Date;
+  /** The revision log of the workbook's table (none for the built-in table). */
+  readonly log?: RevisionLog;
 }
 
 export interface SheetContent {
@@ -78,6 +85,13 @@ export function sheetContent(input: SheetCopyInput): SheetContent {
   if (removed.length > 0) {
     push([]);
     push(['Built-in rows not in this table', removed.map((d) => d.key).join(', ')], true);
+  }
+  if (input.log !== undefined) {
+    const n = input.log.entries.length;
+    push([]);
+    push(['Revision log', `${plural(n, 'entry', 'entries')}, newest first${input.log.dropped > 0 ? `; ${plural(input.log.dropped, 'older entry', 'older entries')} dropped to keep the log within its bounds` : ''}`], true);
+    push(['Revision', 'When (UTC)', '', '', '', 'What', 'Why', 'Who'], true);
+    for (const e of [...input.log.entries].reverse()) push([e.revision, e.at, '', '', '', describeEntry(e).join('\n'), e.why, e.by]);
   }
   return { values, formats, headingRows };
 }

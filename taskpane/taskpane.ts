@@ -21,10 +21,11 @@ import { pollWhileVisible } from './visiblePolling';
 import { renderEph, wireEph } from './eph';
 import { renderConsistency, wireConsistency } from './consistency';
 import { builtinTable } from '../src/table/builtin';
+import { renderLog, wireLog } from './logView';
 import { buildTable } from '../src/table/table';
 import type { PotentialTable } from '../src/table/types';
 
-export const TABS = ['couples', 'electrodes', 'files', 'eph', 'about'] as const;
+export const TABS = ['couples', 'electrodes', 'files', 'eph', 'log', 'about'] as const;
 
 export function selectTab(name: (typeof TABS)[number], focus: boolean): void {
   for (const t of TABS) {
@@ -67,6 +68,7 @@ export function renderAll(): void {
   for (const kind of KINDS) renderList(kind);
   renderEph();
   renderConsistency();
+  renderLog();
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {
@@ -92,6 +94,7 @@ export function start(): void {
   wireFiles();
   wireEph(ephTable);
   wireConsistency(() => (ui.ready ? (ephTable() ?? null) : undefined), builtinTable);
+  wireLog();
   if (typeof Office === 'undefined' || typeof Office.onReady !== 'function') {
     replace(byId('in-use-body'), h('p', {}, 'Office is not available here: open Cellwright from Excel.'));
     byId('app').setAttribute('aria-busy', 'false');

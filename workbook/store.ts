@@ -13,7 +13,8 @@
  * told that too. A stored value that cannot be read is never written over except by an explicit reset
  * that names the exact value it replaces.
  */
-import type { WorkbookCopy } from '../src/store/copy';
+import { ChangeError, type WorkbookCopy } from '../src/store/copy';
+import { type LogAction, type Signoff, EMPTY_LOG, appendEntry, logEntry, signoffProblem } from '../src/store/log';
 import type { VersionedRecords } from '../src/store/rows';
 import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } from '../src/store/stored';
 
@@ -93,15 +94,29 @@ export type WriteOutcome =
   /** Written, but another writer replaced it at the same moment. `state` is what the workbook holds now. */
   | { readonly kind: 'overwritten'; readonly state: StoredState };
 
+/** Who made a write, why, and what kind of action it was: recorded in the revision log. */
+export interface WriteNote extends Signoff {
+  readonly action: LogAction;
+}
+
 /**
  * Writes a copy of the table, as the next revision after `seen` (the stored value the caller last read:
- * null when the workbook had no table). `copy.revision` is ignored: the revision written is the seen
- * one + 1. Throws ChangeError when the copy cannot be stored (too large, rows not usable).
+ * null when the workbook had no table). `copy.revision` and `copy.log` are ignored: the revision
+ * written is the seen one + 1, and the log written is the seen table's log (empty when there was
+ * none, or it was of an older schema) with one entry for this write: `note` (who, why, action), the
+ * time, and every row that differs from the seen table (the built-in table when there was none).
+ * Throws ChangeError when the copy cannot be stored (too large, rows not usable, no name or reason).
  */
-export async function writeCopy(copy: WorkbookCopy, seen: unknown, builtin: VersionedRecords, now: Date = new Date()): Promise<WriteOutcome> {
+export async function writeCopy(copy: WorkbookCopy, seen: unknown, builtin: VersionedRecords, note: WriteNote, now: Date = new Date()): Promise<WriteOutcome> {
+  const problem = signoffProblem(note);
+  if (problem !== null) throw new ChangeError(`not saved: ${problem}`);
   const seenState = interpret(seen, builtin);
-  const revision = (seenState.kind === 'readable' ? seenState.read.copy.revision : 0) + 1;
-  const text = writeStoredText({ ...copy, revision, changedAt: now.toISOString() });
+  const previous = seenState.kind === 'readable' ? seenState.read.copy : null;
+  const revision = (previous?.revision ?? 0) + 1;
+  const at = now.toISOString();
+  const entry = logEntry({ ...note, revision, at, basedOn: copy.basedOn, before: previous ?? builtin, after: copy });
+  const log = appendEntry(previous?.log ?? EMPTY_LOG, entry);
+  const text = writeStoredText({ ...copy, revision, changedAt: at, log });
   return replaceValue(seen, text, builtin);
 }
 

@@ -13,6 +13,7 @@
 import type { CoupleRecord, ElectrodeRecord } from '../table/records';
 import { buildTable } from '../table/table';
 import type { PotentialTable } from '../table/types';
+import type { RevisionLog } from './log';
 import {
   type AnyRecord,
   type RowKind,
@@ -43,6 +44,11 @@ export interface WorkbookCopy extends TableRecords {
   readonly own: KeyLists;
   /** Keys of built-in rows deleted in this workbook. */
   readonly removed: KeyLists;
+  /**
+   * The revision log as read (src/store/log.ts); absent on a copy made in memory. A write appends to
+   * the log of the stored value it replaces (workbook/store.ts), not to this one.
+   */
+  readonly log?: RevisionLog;
 }
 
 /** A change the pane can make. Reset (remove the copy) and pin (write pinnedCopy) act on the store itself. */

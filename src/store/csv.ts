@@ -342,13 +342,14 @@ function num(x: number | undefined): string {
 
 /**
  * The CSV text (layout 1) of a table: a byte-order mark, comment lines naming the table, the header,
- * couples, then electrodes; CRLF line ends. Throws Error when an electrode's other name holds "|"
- * (it could not be read back).
+ * couples, electrodes, then `notes` as comment lines (the revision log; each line formula-guarded
+ * like the first comment line, and skipped by the import); CRLF line ends. Throws Error when an
+ * electrode's other name holds "|" (it could not be read back).
  *
- * Syntax: exportCsv(records, description)
- * Example: exportCsv(table, "workbook copy based on built-in 2026.1; checksum sha256:…")
+ * Syntax: exportCsv(records, description, notes?)
+ * Example: exportCsv(table, "workbook copy based on built-in 2026.1; checksum sha256:…", logLines(log))
  */
-export function exportCsv(t: TableRecords, description: string): string {
+export function exportCsv(t: TableRecords, description: string, notes: readonly string[] = []): string {
   const lines: string[] = [
     commentLine(`# Cellwright potential table, CSV layout 1. ${description}`),
     '# Potentials in V vs SHE at 25 °C; dE/dT in mV/K. Lines starting with # are comments.',
@@ -364,5 +365,6 @@ export function exportCsv(t: TableRecords, description: string): string {
       [cell('electrode'), cell(e.key), '', cell(e.aliases.join(ALIAS_SEPARATOR)), num(e.potential), num(e.dEdT_mV_K), cell(e.source), cell(e.note ?? '')].join(','),
     );
   }
+  for (const note of notes) lines.push(commentLine(`# ${note}`));
   return `\uFEFF${lines.join('\r\n')}\r\n`;
 }

@@ -3,31 +3,44 @@
  * DEVELOPERS.md, "Where the workbook's table is stored"), and the reader that decides whether a
  * stored text can be used.
  *
- * Schema 2 (written now), fields in this order:
- *   format     "cellwright.potential-table"  (anything else is not ours)
- *   schema     2
- *   basedOn    version of the built-in table the copy was pinned to or last brought up to
- *   revision   write counter, 1 for the first write, +1 per write (shown to people; conflicts are
- *              detected on the whole text, see workbook/store.ts)
- *   changedAt  time of the last write, ISO 8601 UTC
- *   checksum   "sha256:" + SHA-256 of the canonical JSON of { basedOn, couples, electrodes, own, removed }
- *              (own and removed sorted); revision and time are not covered, so the same rows always
- *              give the same checksum and a freshly pinned copy has the built-in table's checksum
- *   own        { couples: [keys], electrodes: [keys] }  rows set in this workbook
- *   removed    { couples: [keys], electrodes: [keys] }  built-in rows deleted in this workbook
- *   couples    [{ key, halfReaction, e0, dEdT_mV_K?, source, note? }]
- *   electrodes [{ key, aliases, potential, dEdT_mV_K?, source, note? }]
+ * Schema 3 (written now), fields in this order:
+ *   format      "cellwright.potential-table"  (anything else is not ours)
+ *   schema      3
+ *   basedOn     version of the built-in table the copy was pinned to or last brought up to
+ *   revision    write counter, 1 for the first write, +1 per write (shown to people; conflicts are
+ *               detected on the whole text, see workbook/store.ts)
+ *   changedAt   time of the last write, ISO 8601 UTC
+ *   checksum    "sha256:" + SHA-256 of the canonical JSON of { basedOn, couples, electrodes, own, removed }
+ *               (own and removed sorted); revision, time and log are not covered, so the same rows
+ *               always give the same checksum and a freshly pinned copy has the built-in table's checksum
+ *   own         { couples: [keys], electrodes: [keys] }  rows set in this workbook
+ *   removed     { couples: [keys], electrodes: [keys] }  built-in rows deleted in this workbook
+ *   couples     [{ key, halfReaction, e0, dEdT_mV_K?, source, note? }]
+ *   electrodes  [{ key, aliases, potential, dEdT_mV_K?, source, note? }]
+ *   log         { entries: [{ revision, at, by, why, action, basedOn, rows, moreRows }], dropped }
+ *               the revision log (src/store/log.ts), oldest entry first
+ *   logChecksum "sha256:" + SHA-256 of the canonical JSON of log
  *
- * Schema 1 (the first layout): format, schema 1, basedOn, changedAt, checksum over
- * { basedOn, couples, electrodes }, couples, electrodes: no write counter and no record of which rows
- * were set here. It is upgraded in memory when read (every row that differs from the add-in's built-in
- * table counts as set here, so an update never overwrites it); it is written back as schema 2 only by
- * the next change the user makes.
+ * Why the log has a checksum of its own instead of being covered by `checksum`: `checksum` names the
+ * rows the results were computed with. TABLEINFO("checksum"), the computed-with record that decides
+ * recalculation at start-up, and the "pinned built-in" origin all compare it with the built-in
+ * table's checksum and across workbooks; two workbooks with the same rows but different histories
+ * must keep giving the same one. The log still needs protecting against damage and edits made
+ * outside Cellwright, so `logChecksum` covers it the same way (like `checksum`, it detects damage and
+ * hand edits; it is not a signature).
+ *
+ * Schema 2: as schema 3 without log and logChecksum. Schema 1 (the first layout): format, schema 1,
+ * basedOn, changedAt, checksum over { basedOn, couples, electrodes }, couples, electrodes: no write
+ * counter and no record of which rows were set here. It is upgraded in memory when read (every row
+ * that differs from the add-in's built-in table counts as set here, so an update never overwrites
+ * it). Schema 1 and 2 texts read with an empty log; they are written back as schema 3, their log
+ * starting with the next change the user makes.
  *
  * Reading checks everything and uses nothing partially: the text is JSON, ours, of a schema this
- * add-in knows, every field of the right type and no unknown fields, the checksum matches, and every
+ * add-in knows, every field of the right type and no unknown fields, the checksum matches, every
  * row passes the table's checks (the half-reaction parses and balances, numbers in range, source
- * present, keys unique). Any failure gives a problem with a plain-words message and details.
+ * present, keys unique), and every log entry is well formed with its checksum matching. Any failure
+ * gives a problem with a plain-words message and details.
  */
 import type { CoupleRecord, ElectrodeRecord } from '../table/records';
 import type { PotentialTable } from '../table/types';
@@ -37,16 +50,17 @@ import { type TableRecords, type VersionedRecords, matchKey, sameRecord } from '
 import { sha256Hex } from './sha256';
 import { isTableVersion } from './tableVersion';
 import { isUtcTimestamp } from './utcTimestamp';
+import { EMPTY_LOG, checkLog, logChecksum } from './log';
 import { MAX_FORMULA_CHARS, MAX_KEY_CHARS, MAX_NOTE_CHARS, MAX_SOURCE_CHARS } from '../textLimits';
 
 export const STORED_FORMAT = 'cellwright.potential-table';
-export const STORED_SCHEMA = 2;
+export const STORED_SCHEMA = 3;
 /** The writer refuses texts longer than this (see DEVELOPERS.md for the host limits behind it). */
 export const MAX_STORED_CHARS = 2_000_000;
 /** The reader does not try to read texts longer than this. */
 export const MAX_READ_CHARS = 8_000_000;
 
-export type StoredProblemKind = 'empty' | 'too-large' | 'not-json' | 'not-ours' | 'newer-schema' | 'damaged' | 'checksum' | 'rows';
+export type StoredProblemKind = 'empty' | 'too-large' | 'not-json' | 'not-ours' | 'newer-schema' | 'damaged' | 'checksum' | 'rows' | 'log';
 
 export interface StoredProblem {
   readonly kind: StoredProblemKind;
@@ -63,7 +77,7 @@ export type StoredRead =
       readonly table: PotentialTable;
       /** "sha256:…" of the content. */
       readonly checksum: string;
-      /** The schema the text was written in (1 when it was upgraded on reading). */
+      /** The schema the text was written in (1 or 2 when it was upgraded on reading). */
       readonly schema: number;
     }
   | { readonly ok: false; readonly problem: StoredProblem };
@@ -99,8 +113,8 @@ function schema1Checksum(basedOn: string, couples: unknown, electrodes: unknown)
 }
 
 /**
- * The stored text of a copy (schema 2). The copy's revision and changedAt are written as given: the
- * store sets them (workbook/store.ts). Throws ChangeError when the text would exceed
+ * The stored text of a copy (schema 3). The copy's revision, changedAt and log are written as given:
+ * the store sets them (workbook/store.ts); a copy without a log is written with an empty one. Throws ChangeError when the text would exceed
  * MAX_STORED_CHARS or the copy is not a usable table.
  *
  * Syntax: writeStoredText(copy)
@@ -118,6 +132,8 @@ export function writeStoredText(copy: WorkbookCopy): string {
     removed: { couples: sortedKeys(copy.removed.couples), electrodes: sortedKeys(copy.removed.electrodes) },
     couples: copy.couples,
     electrodes: copy.electrodes,
+    log: copy.log ?? EMPTY_LOG,
+    logChecksum: logChecksum(copy.log ?? EMPTY_LOG),
   };
   const text = JSON.stringify(doc);
   if (text.length > MAX_STORED_CHARS) {
@@ -127,13 +143,13 @@ export function writeStoredText(copy: WorkbookCopy): string {
   }
   // What this text reads as is known now: remember it, so reading it back does not check it again.
   const parsed = JSON.parse(text) as { couples: CoupleRecord[]; electrodes: ElectrodeRecord[] };
-  lastRead = { text, result: { ok: true, copy: { ...copy, couples: parsed.couples, electrodes: parsed.electrodes }, table, checksum: doc.checksum, schema: STORED_SCHEMA } };
+  lastRead = { text, result: { ok: true, copy: { ...copy, couples: parsed.couples, electrodes: parsed.electrodes, log: doc.log }, table, checksum: doc.checksum, schema: STORED_SCHEMA } };
   return text;
 }
 
 /**
- * The last text written or read and what it reads as. Reading is deterministic for schema 2 (schema 1
- * depends on the built-in table, so it is not remembered), and tables of thousands of rows take a
+ * The last text written or read and what it reads as. Reading is deterministic for the current schema
+ * (schema 1 depends on the built-in table, so it is not remembered), and tables of thousands of rows take a
  * noticeable time to check, so the same text is not checked twice in a row.
  */
 let lastRead: { text: string; result: StoredRead } | null = null;
@@ -273,7 +289,9 @@ function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
   const problems: string[] = [];
   const allowedTop = schema === 1
     ? ['format', 'schema', 'basedOn', 'changedAt', 'checksum', 'couples', 'electrodes']
-    : ['format', 'schema', 'basedOn', 'revision', 'changedAt', 'checksum', 'own', 'removed', 'couples', 'electrodes'];
+    : schema === 2
+      ? ['format', 'schema', 'basedOn', 'revision', 'changedAt', 'checksum', 'own', 'removed', 'couples', 'electrodes']
+      : ['format', 'schema', 'basedOn', 'revision', 'changedAt', 'checksum', 'own', 'removed', 'couples', 'electrodes', 'log', 'logChecksum'];
   const extra = Object.keys(doc).filter((k) => !allowedTop.includes(k));
   if (extra.length > 0) problems.push(`fields Cellwright does not write: ${extra.map((k) => JSON.stringify(k)).join(', ')}`);
   const missing = allowedTop.filter((k) => !(k in doc));
@@ -292,7 +310,17 @@ function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
   const electrodes = checkRows('electrodes', doc.electrodes, ELECTRODE_FIELDS, problems);
   const own = schema >= 2 ? checkKeyLists('own', doc.own, problems) : { couples: [], electrodes: [] };
   const removed = schema >= 2 ? checkKeyLists('removed', doc.removed, problems) : { couples: [], electrodes: [] };
+  if (schema >= 3 && (typeof doc.logChecksum !== 'string' || !/^sha256:[0-9a-f]{64}$/.test(doc.logChecksum))) problems.push('"logChecksum" is not "sha256:" and 64 hex digits');
   if (problems.length > 0) return fail('damaged', `the stored table is damaged: ${problems[0]}`, problems.slice(0, 50));
+  const logProblems: string[] = [];
+  const log = schema >= 3 ? checkLog(doc.log, revision, logProblems) : EMPTY_LOG;
+  if (logProblems.length > 0) return fail('log', `the stored table's revision log is damaged: ${logProblems[0].replace(/^revision log: /, '')}`, logProblems);
+  if (schema >= 3 && logChecksum(log) !== doc.logChecksum) {
+    return fail('log', 'the revision log does not match its checksum: the stored table was changed outside Cellwright or damaged', [
+      `stored log checksum ${String(doc.logChecksum)}`,
+      `checksum of the log ${logChecksum(log)}`,
+    ]);
+  }
 
   const basedOn = doc.basedOn as string;
   const expected = schema === 1 ? schema1Checksum(basedOn, doc.couples, doc.electrodes) : contentChecksum({ basedOn, couples: couples as never, electrodes: electrodes as never, own, removed });
@@ -311,6 +339,7 @@ function readUncached(text: unknown, builtin: VersionedRecords): StoredRead {
     electrodes: electrodes as unknown as ElectrodeRecord[],
     own,
     removed,
+    log,
   };
   let table: PotentialTable;
   try {

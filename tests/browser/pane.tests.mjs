@@ -91,18 +91,31 @@ async function fill(page, kind, fields) {
   for (const [name, value] of Object.entries(fields)) await page.fill(`#f-${kind}-${name}`, value);
 }
 
+/** Gives the name (while the pane asks for it) and a reason, as every save asks. */
+async function signoff(page, prefix, why = 'browser test: checking the pane') {
+  if (await page.isVisible(`#${prefix}-by`)) await page.fill(`#${prefix}-by`, 'T. Browser');
+  if ((await page.locator(`#${prefix}-why`).count()) > 0) await page.fill(`#${prefix}-why`, why);
+}
+
+/** Saves an editor form, giving a reason first. */
+async function save(page, kind, why) {
+  await signoff(page, `f-${kind}`, why);
+  await page.click(`#save-${kind}`);
+}
+
 async function addCouple(page, fields) {
   await page.click('#add-couple');
   await fill(page, 'couple', fields);
-  await page.click('#save-couple');
+  await save(page, 'couple');
   await waitIdle(page);
   await page.waitForSelector('#editor-couple', { state: 'hidden' });
 }
 
 const row = (page, kind, key) => page.locator(`#list-${kind} > li`).filter({ has: page.locator('.row-key', { hasText: new RegExp(`^${key.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }) });
 
-async function confirmDialog(page, accept = true) {
+async function confirmDialog(page, accept = true, why = undefined) {
   await page.waitForSelector('dialog#confirm[open]');
+  if (accept) await signoff(page, 'confirm', why);
   await page.click(accept ? '#confirm-ok' : '#confirm-cancel');
   await page.waitForSelector('dialog#confirm', { state: 'hidden' });
 }
@@ -196,14 +209,14 @@ export const tests = [
       assert.match(await text(page, '#f-couple-e0-error'), /must be a number/);
       await shot(page, '03-add-couple-validation-error', '#editor-couple');
       // Saving with errors saves nothing and says why.
-      await page.click('#save-couple');
+      await save(page, 'couple');
       assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
       assert.match(await text(page, '#f-couple-source-error'), /source is required/);
       assert.equal(await page.evaluate(() => document.activeElement?.id), 'f-couple-e0');
       assert.equal(await stored(page), null);
       await page.fill('#f-couple-e0', '−0.336');
       await page.fill('#f-couple-source', 'Our lab, thallium study 2026');
-      await page.click('#save-couple');
+      await save(page, 'couple');
       await waitIdle(page);
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
       assert.match(await notice(page), /Added couple Tl\+\/Tl/);
@@ -235,13 +248,13 @@ export const tests = [
       await page.fill('#f-couple-source', '');
       assert.match(await text(page, '#f-couple-e0-error'), /between -4 and 4 V/);
       assert.match(await text(page, '#f-couple-source-error'), /source is required/);
-      await page.click('#save-couple');
+      await save(page, 'couple');
       assert.match(await text(page, '#f-couple-form-error'), /Not saved/);
       await shot(page, '05-edit-validation-errors', '#editor-couple');
       assert.equal(await stored(page), null);
       await page.fill('#f-couple-e0', '0.3521');
       await page.fill('#f-couple-source', 'Plant QA measurement, 2026-02');
-      await page.click('#save-couple');
+      await save(page, 'couple');
       await waitIdle(page);
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
       assert.equal(await cellE0(page, 'Cu2+/Cu'), 0.3521);
@@ -271,7 +284,7 @@ export const tests = [
       await page.fill('#f-electrode-aliases', 'sodium calomel\nbench SSCE');
       await page.fill('#f-electrode-potential', '0.2371');
       await page.fill('#f-electrode-source', 'Plant reference check, 2026');
-      await page.click('#save-electrode');
+      await save(page, 'electrode');
       await waitIdle(page);
       await page.waitForSelector('#editor-electrode', { state: 'hidden' });
       const e = JSON.parse(await stored(page)).electrodes.find((x) => x.key === 'SSCE');
@@ -290,7 +303,8 @@ export const tests = [
       await row(page, 'couple', 'Zn2+/Zn').getByRole('button', { name: 'Delete Zn2+/Zn' }).click();
       await page.waitForSelector('dialog#confirm[open]');
       assert.match(await text(page, '#confirm'), /Delete Zn2\+\/Zn\?.*#N\/A.*restored/);
-      assert.equal(await page.evaluate(() => document.activeElement?.id), 'confirm-cancel'); // destructive: Cancel has focus
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'confirm-by'); // the name is asked first (none remembered yet)
+      assert.equal(await page.isDisabled('#confirm-ok'), true); // nothing is deleted without a reason
       await shot(page, '06-confirm-delete');
       await confirmDialog(page, true);
       await waitIdle(page);
@@ -307,7 +321,7 @@ export const tests = [
       await page.fill('#filter-couple', 'Ag+/Ag');
       await row(page, 'couple', 'Ag+/Ag').getByRole('button', { name: 'Edit Ag+/Ag' }).click();
       await fill(page, 'couple', { e0: '0.80', source: 'lab' });
-      await page.click('#save-couple');
+      await save(page, 'couple');
       await waitIdle(page);
       await page.waitForSelector('#editor-couple', { state: 'hidden' });
       assert.equal(await cellE0(page, 'Ag+/Ag'), 0.8);
@@ -347,6 +361,7 @@ export const tests = [
     async run({ open, shot }) {
       const page = await openPane(open);
       await page.click('#pin');
+      await confirmDialog(page, true);
       await waitIdle(page);
       assert.match(await notice(page), new RegExp(`Pinned: the built-in table ${BUILTIN_VERSION}`));
       const pinned = JSON.parse(await stored(page));
@@ -403,6 +418,7 @@ export const tests = [
       await shot(page, '09-import-report-with-rejected-lines', '#import-check');
       assert.equal(await stored(page), null); // checking changed nothing
       await page.click('#import-valid');
+      await confirmDialog(page, true);
       await waitIdle(page);
       assert.match(await notice(page), /Imported 2 couples and 1 electrode/);
       assert.equal(await cellE0(page, 'Tl+/Tl'), -0.336);
@@ -497,6 +513,14 @@ export const tests = [
       await page.keyboard.press('Tab');
       await page.keyboard.press('Tab');
       await page.keyboard.type('CRC Handbook, 92nd ed.');
+      await page.keyboard.press('Tab'); // note
+      await page.keyboard.press('Tab');
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'f-couple-by'); // the name, asked once
+      await page.keyboard.type('K. Board');
+      await page.keyboard.press('Tab');
+      assert.equal(await page.isDisabled('#save-couple'), true); // Save waits for a reason
+      await page.keyboard.type('gallium strike bath added');
+      assert.equal(await page.isDisabled('#save-couple'), false);
       await shot(page, '11-keyboard-entry', '#editor-couple');
       await page.keyboard.press('Enter'); // submits the form
       await waitIdle(page);
@@ -513,7 +537,12 @@ export const tests = [
       assert.equal(await page.evaluate(() => document.activeElement?.getAttribute('aria-label')), 'Delete Ga3+/Ga'); // focus returns
       await page.keyboard.press('Enter');
       await page.waitForSelector('dialog#confirm[open]');
-      await page.keyboard.press('Shift+Tab'); // from Cancel to Delete
+      // The name is remembered now: only the reason is asked, and it has focus.
+      assert.equal(await page.evaluate(() => document.activeElement?.id), 'confirm-why');
+      assert.equal(await page.isVisible('#confirm-by'), false);
+      assert.match(await text(page, '#confirm'), /Recorded as K\. Board/);
+      await page.keyboard.type('added by mistake');
+      await page.keyboard.press('Tab'); // from the reason to Delete
       assert.equal(await page.evaluate(() => document.activeElement?.id), 'confirm-ok');
       await page.keyboard.press('Enter');
       await waitIdle(page);
@@ -541,7 +570,7 @@ export const tests = [
       await page.click('#tab-electrodes');
       await page.click('#add-electrode');
       await fill(page, 'electrode', { key: '<img src=y onerror=window.__pwned=3>', aliases: '=HYPERLINK("http://example.invalid","x")', potential: '0.2', source: '"><svg onload=window.__pwned=4>' });
-      await page.click('#save-electrode');
+      await save(page, 'electrode');
       await waitIdle(page);
       await page.waitForSelector('#editor-electrode', { state: 'hidden' });
       await page.click('#tab-couples');
@@ -619,6 +648,7 @@ export const tests = [
     async run({ open }) {
       const page = await openPane(open);
       await page.click('#pin');
+      await confirmDialog(page, true);
       await waitIdle(page);
       const raw = (await stored(page)).replace(/"e0":0\.3372/, '"e0":1e999');
       await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [KEY, raw]);
@@ -672,7 +702,7 @@ export const tests = [
       await page.fill('#filter-couple', 'Cu2+/Cu');
       await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
       await fill(page, 'couple', { e0: '0.35', source: 'pane A' });
-      await page.click('#save-couple');
+      await save(page, 'couple');
       await waitIdle(page);
       const msg = await notice(page);
       assert.match(msg, /Not saved: this workbook’s table was changed elsewhere/);
@@ -712,6 +742,7 @@ export const tests = [
       await page.waitForSelector('#import-all');
       assert.match(await text(page, '#import-report'), /2,000 lines accepted, 0 lines rejected/);
       await page.click('#import-all');
+      await confirmDialog(page, true);
       await waitIdle(page);
       assert.match(await notice(page), /Imported 2000 couples/);
       const size = (await stored(page)).length;
@@ -880,12 +911,12 @@ export const tests = [
       assert.ok(li.includes(notes['Li+/Li']), li);
       assert.equal(await page.locator('#consistency-list .unexplained').count(), 0);
       await fitsWidth(page);
-      await shot(page, '25-consistency-built-in', '#consistency');
+      await shot(page, '27-consistency-built-in', '#consistency');
       // the workbook's copy with Cu2+/Cu at 0.40 V: reported against its species data, with no explanation
       await page.fill('#filter-couple', 'Cu2+/Cu');
       await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
       await fill(page, 'couple', { e0: '0.40', source: 'edited for the test' });
-      await page.click('#save-couple');
+      await save(page, 'couple');
       await waitIdle(page);
       await page.waitForFunction(() => /Cu2\+\/Cu against its species-derived E°/.test(document.getElementById('consistency-list')?.textContent ?? ''));
       // two lines: the row against its species data, and the cycle Cu2+/Cu = Cu2+/Cu+ + Cu+/Cu
@@ -895,7 +926,79 @@ export const tests = [
       // NBS 1982: ΔfG°(Cu2+) = 65.49 kJ/mol, E° = 65490/(2 × 96485.33212) = 0.3394 V; 0.40 V is +60.6 mV above it
       assert.match(cu, /: \+60\.6 mV/);
       assert.match(cu, /No explanation on file/);
-      await shot(page, '26-consistency-edited-row', '#consistency');
+      await shot(page, '28-consistency-edited-row', '#consistency');
+    },
+  },
+  {
+    name: 'revision log: a save asks for a reason (and the name once), the log shows what/who/when/why, Copy to sheet and CSV carry it',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.fill('#filter-couple', 'Cu2+/Cu');
+      await row(page, 'couple', 'Cu2+/Cu').getByRole('button', { name: 'Edit Cu2+/Cu' }).click();
+      await page.fill('#f-couple-e0', '0.35');
+      await page.fill('#f-couple-source', 'Plant QA measurement, bath 4, 2026-11');
+      // Nothing is saved without a reason: Save stays disabled, the name is asked because none is remembered.
+      assert.equal(await page.isDisabled('#save-couple'), true);
+      assert.equal(await page.isVisible('#f-couple-by'), true);
+      await labelled(page);
+      await fitsWidth(page);
+      await shot(page, '25-save-asks-for-a-reason', '#editor-couple');
+      await page.fill('#f-couple-by', 'Q. Engineer');
+      assert.equal(await page.isDisabled('#save-couple'), true); // a name alone is not enough
+      await page.fill('#f-couple-why', 'bath 4 re-measured against the plant SCE');
+      assert.equal(await page.isDisabled('#save-couple'), false);
+      await page.click('#save-couple');
+      await waitIdle(page);
+      await page.waitForSelector('#editor-couple', { state: 'hidden' });
+      // A second change with a reason that would be a formula in a spreadsheet.
+      await page.fill('#filter-couple', 'Zn');
+      await row(page, 'couple', 'Zn2+/Zn').getByRole('button', { name: 'Delete Zn2+/Zn' }).click();
+      await page.waitForSelector('dialog#confirm[open]');
+      assert.equal(await page.isVisible('#confirm-by'), false); // the name is asked once
+      await confirmDialog(page, true, '=HYPERLINK("http://example.invalid","x"),+1 not used on this line');
+      await waitIdle(page);
+      const doc = JSON.parse(await stored(page));
+      assert.equal(doc.schema, 3);
+      assert.deepEqual(doc.log.entries.map((e) => [e.revision, e.action, e.by]), [[1, 'edit', 'Q. Engineer'], [2, 'delete', 'Q. Engineer']]);
+      assert.deepEqual(doc.log.entries[0].rows[0].fields[0], { field: 'e0', from: builtinE0('Cu2+/Cu'), to: 0.35 });
+      // The Log tab: newest first, what, who, when, why.
+      await page.click('#tab-log');
+      const items = page.locator('#log-list > li');
+      assert.equal(await items.count(), 2);
+      const newest = (await items.nth(0).innerText()).replace(/\s+/g, ' ');
+      assert.match(newest, new RegExp(`^Revision 2 · .* · Q\\. Engineer Deleted a row\\. couple Zn2\\+/Zn removed \\(was: .*E° ${builtinE0('Zn2+/Zn')} V.*\\) Why: =HYPERLINK\\("http://example\\.invalid","x"\\),\\+1 not used on this line UTC 20\\d\\d-`));
+      const oldest = (await items.nth(1).innerText()).replace(/\s+/g, ' ');
+      assert.match(oldest, new RegExp(`^Revision 1 · .* · Q\\. Engineer Edited a row\\. couple Cu2\\+/Cu: E° ${builtinE0('Cu2+/Cu')} V → 0\\.35 V; source “.*” → “Plant QA measurement, bath 4, 2026-11” Why: bath 4 re-measured against the plant SCE`));
+      assert.match(await text(page, '#log-summary'), /^2 entries, newest first\./);
+      await labelled(page);
+      await fitsWidth(page);
+      await shot(page, '26-revision-log', '#panel-log');
+      // The name given once shows here and can be changed later.
+      assert.equal(await page.inputValue('#log-name'), 'Q. Engineer');
+      await page.fill('#log-name', 'Q. Engineer (QA)');
+      await page.click('#log-name-save');
+      assert.match(await text(page, '#log-name-status'), /recorded as Q\. Engineer \(QA\)/);
+      // Copy to sheet writes the log after the rows, every text cell as text.
+      await page.click('#log-copy-sheet');
+      assert.match(await notice(page), /Copied the table to the new sheet/);
+      const sheet = (await page.evaluate(() => window.__stubWorkbook.file().sheets))['Potential table'];
+      const main = sheet.writes.find((w) => w.values);
+      assert.equal(main.formulas, 0);
+      const head = main.values.findIndex((r) => r[0] === 'Revision log');
+      assert.ok(head > 0, 'the sheet has a Revision log section');
+      assert.deepEqual([main.values[head + 2][0], main.values[head + 2][6], main.values[head + 2][7]], [2, '=HYPERLINK("http://example.invalid","x"),+1 not used on this line', 'Q. Engineer']);
+      // The CSV export carries the log as comment lines, guarded piece by piece.
+      await page.click('#tab-files');
+      await page.click('#export-show');
+      const csv = await page.inputValue('#export-text');
+      const logLines = csv.split(/\r?\n/).filter((l) => l.startsWith('# Revision'));
+      assert.equal(logLines.length, 3); // the heading and two entries
+      assert.ok(logLines.some((l) => l.includes(`'+1 not used on this line`)), logLines.join('\n'));
+      for (const l of logLines) for (const piece of l.split(/[,;\t]/)) assert.doesNotMatch(piece.trimStart(), /^[=+\-@"]/, l);
+      // Reopened, the log is still there and reads.
+      await reopen(page);
+      await page.click('#tab-log');
+      assert.equal(await page.locator('#log-list > li').count(), 2);
     },
   },
 ];

@@ -31,7 +31,7 @@ import {
 import { builtinTable } from '../../src/table/builtin';
 import { RUNS, SEED, messageProblem } from './support';
 
-const KINDS = new Set(['empty', 'too-large', 'not-json', 'not-ours', 'newer-schema', 'damaged', 'checksum', 'rows']);
+const KINDS = new Set(['empty', 'too-large', 'not-json', 'not-ours', 'newer-schema', 'damaged', 'checksum', 'rows', 'log']);
 const CASES = Math.max(1000, Math.floor(RUNS / 5));
 
 function deepFreeze<T>(x: T): T {

@@ -7,7 +7,7 @@
  * JSON.stringify cannot write is reached too: numbers beyond double range (1e999 reads as Infinity),
  * 20,000-deep nesting, strings of hundreds of thousands of characters, and values of every wrong
  * type, in every field (top-level fields, a field of a couple or an electrode row, a key of the
- * own/removed lists, a whole row). The checksum is left as it was or recomputed where it can be, so
+ * own/removed lists, a whole row, a revision log entry and its rows). The checksums are left as it was or recomputed where it can be, so
  * both the checks before the checksum and the row checks behind it are reached.
  *
  * Cases: FUZZ_RUNS (1,000 by default; `npm run fuzz` runs 100,000). FUZZ_SEED replays a failure.
@@ -18,12 +18,13 @@ import { pinnedCopy, type WorkbookCopy } from '../../src/store/copy';
 import { recordsOf, type VersionedRecords } from '../../src/store/rows';
 import { type StoredRead, contentChecksum, forgetLastRead, readStoredText, writeStoredText } from '../../src/store/stored';
 import { builtinTable } from '../../src/table/builtin';
+import { EMPTY_LOG, appendEntry, logChecksum, logEntry } from '../../src/store/log';
 import { customFunctionsGlobal, FakeCfError } from '../taskpane/mockExcel';
 import { RUNS, SEED } from './support';
 
 const g = globalThis as Record<string, unknown>;
 const builtin: VersionedRecords = recordsOf(builtinTable());
-const KINDS = new Set(['empty', 'too-large', 'not-json', 'not-ours', 'newer-schema', 'damaged', 'checksum', 'rows']);
+const KINDS = new Set(['empty', 'too-large', 'not-json', 'not-ours', 'newer-schema', 'damaged', 'checksum', 'rows', 'log']);
 
 function validTexts(): string[] {
   const pinned: WorkbookCopy = { ...pinnedCopy(builtin), revision: 2, changedAt: '2026-11-30T12:00:00.000Z' };
@@ -34,7 +35,16 @@ function validTexts(): string[] {
     electrodes: pinned.electrodes.slice(0, 4),
     removed: { couples: [first.key, ...rest.slice(20).map((c) => c.key)], electrodes: pinned.electrodes.slice(4).map((e) => e.key) },
   };
-  return [writeStoredText(pinned), writeStoredText(changed)];
+  // A table with a revision log of three entries (a pin, an edit, a deletion), so log entries, their
+  // rows and their field values are fuzzed too.
+  const cu = pinned.couples.find((c) => c.key === 'Cu2+/Cu')!;
+  const edited: WorkbookCopy = { ...pinned, revision: 3, couples: pinned.couples.map((c) => (c === cu ? { ...c, e0: 0.35, note: 'lab value' } : c)) };
+  const entry = (revision: number, action: 'pin' | 'edit' | 'delete', before: WorkbookCopy, after: WorkbookCopy) =>
+    logEntry({ by: 'A. Tester', why: `reason ${revision}`, revision, at: '2026-11-30T12:00:00.000Z', action, basedOn: builtin.version, before, after });
+  let log = appendEntry(EMPTY_LOG, entry(1, 'pin', pinned, pinned));
+  log = appendEntry(log, entry(2, 'edit', pinned, edited));
+  log = appendEntry(log, entry(3, 'delete', edited, changed));
+  return [writeStoredText(pinned), writeStoredText(changed), writeStoredText({ ...changed, revision: 3, log })];
 }
 const TEXTS = validTexts();
 
@@ -54,7 +64,7 @@ const hostileJson: fc.Arbitrary<string> = fc.oneof(
 function placesOf(doc: unknown): Array<Array<string | number>> {
   const out: Array<Array<string | number>> = [];
   const walk = (x: unknown, path: Array<string | number>, depth: number): void => {
-    if (depth > 4) return;
+    if (depth > 7) return;
     if (Array.isArray(x)) x.forEach((v, i) => (out.push([...path, i]), walk(v, [...path, i], depth + 1)));
     else if (typeof x === 'object' && x !== null) for (const k of Object.keys(x)) {
       out.push([...path, k]);
@@ -80,6 +90,7 @@ const storedValue: fc.Arbitrary<string> = fc
     if (recompute) {
       try {
         doc.checksum = contentChecksum(doc as never);
+        if (doc.log !== undefined) doc.logChecksum = logChecksum(doc.log as never);
       } catch {
         /* not computable over this structure: leave the old checksum */
       }

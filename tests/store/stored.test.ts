@@ -22,7 +22,7 @@ describe('stored table: round trip', () => {
     const r = readStoredText(text, B);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    expect(r.schema).toBe(2);
+    expect(r.schema).toBe(3);
     expect(r.copy.revision).toBe(7);
     expect(r.copy.couples).toEqual(edited.couples);
     expect(r.copy.own.couples).toEqual(['Cu2+/Cu']);
@@ -77,9 +77,10 @@ describe('stored table: schema upgrade', () => {
     expect([...r.copy.own.couples].sort()).toEqual(['Ag+/Ag', 'Tl+/Tl']);
     expect(r.copy.removed.couples).toEqual(['Li+/Li']);
     expect(r.table.findCouple('Ag+/Ag')!.e0).toBe(0.8);
-    // Written back, it is schema 2 and reads the same.
+    // Written back, it is schema 3 (with the log it started, empty here) and reads the same.
+    expect(r.copy.log).toEqual({ entries: [], dropped: 0 });
     const again = readStoredText(writeStoredText({ ...r.copy, revision: 1 }), B);
-    expect(again.ok && again.schema).toBe(2);
+    expect(again.ok && again.schema).toBe(3);
     expect(again.ok && again.copy.couples).toEqual(r.copy.couples);
   });
 
@@ -92,10 +93,10 @@ describe('stored table: schema upgrade', () => {
 
   it('refuses a newer schema and says so', () => {
     const doc = JSON.parse(written());
-    doc.schema = 3;
+    doc.schema = 4;
     const r = readStoredText(JSON.stringify(doc), B);
     expect(!r.ok && r.problem.kind).toBe('newer-schema');
-    expect(!r.ok && r.problem.message).toMatch(/newer version of Cellwright \(schema 3/);
+    expect(!r.ok && r.problem.message).toMatch(/newer version of Cellwright \(schema 4/);
   });
 });
 

@@ -13,8 +13,12 @@ import { exportCsv, importCsv } from '../../src/store/csv';
 import { type VersionedRecords } from '../../src/store/rows';
 import { contentChecksum, forgetLastRead, writeSchema1Text, writeStoredText } from '../../src/store/stored';
 import { pinnedCopy } from '../../src/store/copy';
+import { type RevisionLog, logChecksum } from '../../src/store/log';
 import { TableModel } from '../../taskpane/model';
 import { copyToSheet, sheetContent } from '../../taskpane/sheet';
+
+/** Who and why, as the pane asks them before every write. */
+const S = { by: 'A. Tester', why: 'test change' };
 import { builtin, manyCouples, newerBuiltin } from '../store/fixtures';
 import { FakeCfError, WorkbookFile, customFunctionsGlobal, excelFor } from './mockExcel';
 
@@ -55,13 +59,13 @@ describe('round trip', () => {
     expect(a.state.kind).toBe('none');
     expect(await cellE0('Cu2+/Cu')).toBe(cu().e0);
 
-    const r = await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'our lab 2026' } });
+    const r = await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'our lab 2026' } }, S);
     expect(r.kind).toBe('done');
     expect(file.calculations).toEqual(['Full']);
     expect(await cellE0('Cu(2+)/Cu')).toBe(0.35);
 
     const stored = file.settings.get(TABLE_SETTING_KEY) as string;
-    expect(JSON.parse(stored)).toMatchObject({ schema: 2, revision: 1, basedOn: B.version, changedAt: '2026-03-04T05:06:07.000Z' });
+    expect(JSON.parse(stored)).toMatchObject({ schema: 3, revision: 1, basedOn: B.version, changedAt: '2026-03-04T05:06:07.000Z' });
     // The recalculation records the table the results are now computed with (checked at the next start-up).
     expect(file.settings.get(COMPUTED_WITH_KEY)).toBe(a.checksum);
     expect(a.checksum).toMatch(/^sha256:[0-9a-f]{64}$/);
@@ -76,7 +80,7 @@ describe('round trip', () => {
     expect(file.calculations).toEqual(['Full', 'Full']);
 
     // A second change is revision 2.
-    await b.change({ kind: 'delete', rowKind: 'couple', key: 'Ag+/Ag' });
+    await b.change({ kind: 'delete', rowKind: 'couple', key: 'Ag+/Ag' }, S);
     expect(JSON.parse(file.settings.get(TABLE_SETTING_KEY) as string).revision).toBe(2);
     const na = (await cellE0('Ag+/Ag')) as FakeCfError;
     expect(na).toBeInstanceOf(FakeCfError);
@@ -86,9 +90,9 @@ describe('round trip', () => {
   it('revert and reset bring the built-in values back, and reset removes the stored table', async () => {
     const a = model();
     await a.load();
-    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'x' } });
-    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'x' } });
-    expect((await a.change({ kind: 'revert', rowKind: 'couple', key: 'Cu2+/Cu' })).kind).toBe('done');
+    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'x' } }, S);
+    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'x' } }, S);
+    expect((await a.change({ kind: 'revert', rowKind: 'couple', key: 'Cu2+/Cu' }, S)).kind).toBe('done');
     expect(await cellE0('Cu2+/Cu')).toBe(cu().e0);
     expect(a.differences().map((d) => d.key)).toEqual(['Ag+/Ag']);
     const r = await a.reset();
@@ -102,7 +106,7 @@ describe('round trip', () => {
   it('a change the table would not accept is refused with the reason and nothing is written', async () => {
     const a = model();
     await a.load();
-    const r = await a.change({ kind: 'put', rowKind: 'couple', originalKey: null, record: { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.3, source: 'x' } });
+    const r = await a.change({ kind: 'put', rowKind: 'couple', originalKey: null, record: { key: 'Cu2+/Cu', halfReaction: 'Cu2+ + 2e- -> Cu', e0: 0.3, source: 'x' } }, S);
     expect(r.kind).toBe('refused');
     expect(r.message).toMatch(/already in the table/);
     expect(file.settings.size).toBe(0);
@@ -122,25 +126,27 @@ describe('opening the pane while the functions are still reading the workbook', 
 
     const b = new TableModel({ builtin: B, host: () => undefined });
     await b.load();
-    const r = await b.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' });
+    const r = await b.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' }, S);
     expect(r.kind === 'done' && r.warning).toMatch(/do not run in this pane’s page/);
     expect(file.calculations).toEqual(['Full']); // still recalculated, for functions running elsewhere
   });
 });
 
 describe('schema upgrade', () => {
-  it('a schema-1 table is used as stored, and the next change writes schema 2 without losing its rows', async () => {
+  it('a schema-1 table is used as stored, and the next change writes schema 3 without losing its rows, starting the log', async () => {
     const rows = B.couples.map((c) => (c.key === 'Ag+/Ag' ? { ...c, e0: 0.8 } : c));
     file.settings.set(TABLE_SETTING_KEY, writeSchema1Text({ basedOn: B.version, changedAt: '2025-01-01T00:00:00Z', couples: rows, electrodes: B.electrodes }));
     const a = model();
     await a.load();
     expect(a.state.kind === 'readable' && a.state.read.schema).toBe(1);
     expect(await cellE0('Ag+/Ag')).toBe(0.8);
-    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'x' } });
+    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'x' } }, S);
     const doc = JSON.parse(file.settings.get(TABLE_SETTING_KEY) as string);
-    expect(doc.schema).toBe(2);
+    expect(doc.schema).toBe(3);
     expect(doc.revision).toBe(1);
     expect(doc.own.couples.sort()).toEqual(['Ag+/Ag', 'Cu2+/Cu']);
+    expect(doc.log.dropped).toBe(0);
+    expect(doc.log.entries.map((e: { revision: number; by: string; action: string }) => [e.revision, e.by, e.action])).toEqual([[1, 'A. Tester', 'edit']]);
     expect(await cellE0('Ag+/Ag')).toBe(0.8);
   });
 });
@@ -153,6 +159,15 @@ describe('damaged data and checksum mismatch', () => {
     ['someone else\'s value', () => 'hello', /not valid JSON|not written by Cellwright/],
     // A number beyond double range (JSON reads it as Infinity) and 20,000-deep nesting, behind a stale checksum.
     ['a number beyond double range', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', '"e0":1e999'), /"e0" is not a finite number/],
+    // A log entry whose reason was emptied, its log checksum recomputed so the entry check itself is reached.
+    ['a damaged revision log entry', () => {
+      const log: RevisionLog = { entries: [{ revision: 1, at: '2026-01-01T00:00:00.000Z', by: 'A', why: 'pin', action: 'pin', basedOn: B.version, rows: [], moreRows: 0 }], dropped: 0 };
+      const doc = JSON.parse(writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z', log }));
+      doc.log.entries[0].why = '';
+      doc.logChecksum = logChecksum(doc.log);
+      return JSON.stringify(doc);
+    }, /revision log is damaged: entry 1: "why" is not a reason/],
+    ['a revision log changed behind its checksum', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z', log: { entries: [], dropped: 0 } }).replace('"dropped":0', '"dropped":7'), /revision log does not match its checksum/],
     ['a field nested 20,000 deep', () => writeStoredText({ ...pinnedCopy(B), revision: 1, changedAt: '2026-01-01T00:00:00.000Z' }).replace('"e0":0.3372', `"e0":${'['.repeat(20_000)}0.3372${']'.repeat(20_000)}`), /"e0" is not a finite number/],
   ];
   for (const [name, value, reason] of damaged) {
@@ -169,8 +184,8 @@ describe('damaged data and checksum mismatch', () => {
       expect(cell.message).toMatch(reason);
       expect(cell.message!.length).toBeLessThanOrEqual(300);
 
-      expect((await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' })).kind).toBe('refused');
-      expect((await a.pin()).kind).toBe('refused');
+      expect((await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' }, S)).kind).toBe('refused');
+      expect((await a.pin(S)).kind).toBe('refused');
       expect(file.settings.get(TABLE_SETTING_KEY)).toBe(raw);
 
       const r = await a.reset();
@@ -201,7 +216,7 @@ describe('2,000 rows', () => {
     const a = model();
     await a.load();
     const t0 = performance.now();
-    const r = await a.change({ kind: 'import', mode: 'merge', couples: imp.couples, electrodes: imp.electrodes });
+    const r = await a.change({ kind: 'import', mode: 'merge', couples: imp.couples, electrodes: imp.electrodes }, S);
     const writeMs = performance.now() - t0;
     expect(r.kind).toBe('done');
     const stored = file.settings.get(TABLE_SETTING_KEY) as string;
@@ -223,9 +238,9 @@ describe('concurrent edits from two panes of the same workbook', () => {
     const b = model();
     await a.load();
     await b.load();
-    expect((await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'pane A' } })).kind).toBe('done');
+    expect((await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'pane A' } }, S)).kind).toBe('done');
     const before = file.settings.get(TABLE_SETTING_KEY);
-    const r = await b.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'pane B' } });
+    const r = await b.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'pane B' } }, S);
     expect(r.kind).toBe('conflict');
     if (r.kind !== 'conflict') return;
     expect(file.settings.get(TABLE_SETTING_KEY)).toBe(before); // nothing written
@@ -247,10 +262,10 @@ describe('concurrent edits from two panes of the same workbook', () => {
     await b.load();
     // B checks the workbook, then A writes completely, then B's write lands on top of A's.
     file.beforeNextWrite = async () => {
-      const ra = await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'pane A' } });
+      const ra = await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'pane A' } }, S);
       expect(ra.kind).toBe('done');
     };
-    const rb = await b.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'pane B' } });
+    const rb = await b.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'pane B' } }, S);
     expect(rb.kind).toBe('done'); // B's own read-back found its table: B cannot know yet
     // A's next look at the workbook finds its change gone and says so.
     const report = await a.checkForChangesElsewhere();
@@ -280,7 +295,7 @@ describe('concurrent edits from two panes of the same workbook', () => {
       if (calls === 2) file.settings.set(TABLE_SETTING_KEY, other); // before the read-back
       return realRun.call(g.Excel, cb);
     };
-    const r = await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' });
+    const r = await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' }, S);
     expect(r.kind).toBe('conflict');
     expect(r.message).toMatch(/written over/);
     expect(a.state.kind === 'readable' && a.state.read.copy.revision).toBe(5);
@@ -289,7 +304,7 @@ describe('concurrent edits from two panes of the same workbook', () => {
   it('nothing changed elsewhere: no report', async () => {
     const a = model();
     await a.load();
-    await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' });
+    await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' }, S);
     expect(await a.checkForChangesElsewhere()).toBeNull();
   });
 });
@@ -298,11 +313,11 @@ describe('pin and a newer built-in table', () => {
   it('pin stores the built-in table with its checksum; a newer add-in shows what would change and updates keeping own rows', async () => {
     const a = model();
     await a.load();
-    expect((await a.pin()).kind).toBe('done');
+    expect((await a.pin(S)).kind).toBe('done');
     expect(a.state.kind === 'readable' && a.state.read.checksum).toBe(a.checksum);
     expect(a.differences()).toEqual([]);
     expect(a.builtinNotice()).toBeNull();
-    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'lab' } });
+    await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'lab' } }, S);
 
     // The add-in is updated: its built-in table is newer.
     const N = newerBuiltin(B);
@@ -313,7 +328,7 @@ describe('pin and a newer built-in table', () => {
     const notice = b.builtinNotice()!;
     expect(notice.addinIsNewer).toBe(true);
     expect(notice.changes.map((d) => `${d.key}:${d.status}`).sort()).toEqual(['Au+/Au:removed', 'Cu2+/Cu:changed', 'Tl+/Tl:added']);
-    expect((await b.change({ kind: 'update-to-builtin' })).kind).toBe('done');
+    expect((await b.change({ kind: 'update-to-builtin' }, S)).kind).toBe('done');
     expect(await cellE0('Cu2+/Cu')).toBe(0.3521);
     expect(await cellE0('Ag+/Ag')).toBe(0.8);
     expect(b.builtinNotice()).toBeNull();
@@ -324,7 +339,7 @@ describe('copy to sheet', () => {
   it('writes the table with version, checksum and sources, keeps hostile text as text, and never reuses a sheet name', async () => {
     const a = model();
     await a.load();
-    await a.change({ kind: 'put', rowKind: 'couple', originalKey: null, record: { key: 'Tl+/Tl', halfReaction: 'Tl+ + e- -> Tl', e0: -0.336, source: '=HYPERLINK("http://example.invalid","x")', note: '<b>bold?</b>' } });
+    await a.change({ kind: 'put', rowKind: 'couple', originalKey: null, record: { key: 'Tl+/Tl', halfReaction: 'Tl+ + e- -> Tl', e0: -0.336, source: '=HYPERLINK("http://example.invalid","x")', note: '<b>bold?</b>' } }, S);
     const input = { records: a.records, builtin: B, description: 'This workbook’s own table', version: B.version, checksum: a.checksum!, now: new Date('2026-01-01T00:00:00Z') };
     const name1 = await copyToSheet(input);
     const name2 = await copyToSheet(input);
@@ -351,9 +366,66 @@ describe('copy to sheet', () => {
   it('the checksum shown for a pinned table equals the stored one', async () => {
     const a = model();
     await a.load();
-    await a.pin();
+    await a.pin(S);
     const doc = JSON.parse(file.settings.get(TABLE_SETTING_KEY) as string);
     expect(doc.checksum).toBe(a.checksum);
     expect(contentChecksum(a.copy!)).toBe(a.checksum);
+  });
+});
+
+describe('revision log through the pane model', () => {
+  it('each write records who, when, why and the row’s old → new values; the log survives reopening', async () => {
+    const a = model();
+    await a.load();
+    expect((await a.pin({ by: 'Q. Engineer', why: 'freeze the data for the customer audit' })).kind).toBe('done');
+    const r = await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'our lab 2026' } }, { by: 'Q. Engineer', why: 'bath 4 measured value' });
+    expect(r.kind).toBe('done');
+    const b = model();
+    await b.load();
+    const log = b.copy!.log!;
+    expect(log.dropped).toBe(0);
+    expect(log.entries.map((e) => [e.revision, e.action, e.by, e.why, e.at])).toEqual([
+      [1, 'pin', 'Q. Engineer', 'freeze the data for the customer audit', '2026-03-04T05:06:07.000Z'],
+      [2, 'edit', 'Q. Engineer', 'bath 4 measured value', '2026-03-04T05:06:07.000Z'],
+    ]);
+    expect(log.entries[1].rows).toEqual([
+      { table: 'couples', key: 'Cu2+/Cu', change: 'changed', fields: [{ field: 'e0', from: cu().e0, to: 0.35 }, { field: 'source', from: cu().source, to: 'our lab 2026' }] },
+    ]);
+    // Copy to sheet writes the log after the rows, newest first, every text cell as text.
+    const c = sheetContent({ records: b.records, builtin: B, description: 'x', version: B.version, checksum: b.checksum!, now: new Date(0), log });
+    const head = c.values.findIndex((row) => row[0] === 'Revision log');
+    expect(c.values[head][1]).toBe('2 entries, newest first');
+    expect(c.values[head + 2].slice(0, 2)).toEqual([2, '2026-03-04T05:06:07.000Z']);
+    expect(c.values[head + 2][5]).toBe(`edited a row\ncouple Cu2+/Cu: E° ${cu().e0} V → 0.35 V; source “${cu().source}” → “our lab 2026”`);
+    expect(c.values[head + 2].slice(6)).toEqual(['bath 4 measured value', 'Q. Engineer']);
+    expect(c.values[head + 3][0]).toBe(1);
+    expect(c.formats[head + 2][6]).toBe('@');
+  });
+
+  it('a write without a reason or a name is refused and nothing is stored', async () => {
+    const a = model();
+    await a.load();
+    const r = await a.change({ kind: 'delete', rowKind: 'couple', key: 'Zn2+/Zn' }, { by: 'Q. Engineer', why: '  ' });
+    expect(r.kind).toBe('refused');
+    expect(r.kind === 'refused' && r.message).toMatch(/give a reason/);
+    expect((await a.pin({ by: '', why: 'audit' })).kind).toBe('refused');
+    expect(file.settings.has(TABLE_SETTING_KEY)).toBe(false);
+  });
+
+  it('a change applied again after a conflict keeps its name and reason, and logs against the latest table', async () => {
+    const a = model();
+    const b = model();
+    await a.load();
+    await b.load();
+    expect((await a.change({ kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...cu(), e0: 0.35, source: 'pane A' } }, { by: 'A', why: 'first' })).kind).toBe('done');
+    const r = await b.change({ kind: 'put', rowKind: 'couple', originalKey: 'Ag+/Ag', record: { ...ag(), e0: 0.8, source: 'pane B' } }, { by: 'B', why: 'second' });
+    expect(r.kind).toBe('conflict');
+    if (r.kind !== 'conflict') return;
+    expect((await r.retry!()).kind).toBe('done');
+    const log = b.copy!.log!;
+    expect(log.entries.map((e) => [e.revision, e.by, e.why, e.rows.map((x) => x.key)])).toEqual([
+      [1, 'A', 'first', ['Cu2+/Cu']],
+      [2, 'B', 'second', ['Ag+/Ag']],
+    ]);
   });
 });
