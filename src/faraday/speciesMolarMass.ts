@@ -21,14 +21,23 @@ export function speciesMolarMass(species: string | number): number {
     if (!(species > 0) || !Number.isFinite(species)) throw new DomainError('a molar mass must be a finite number > 0');
     return species;
   }
+  // A range of DEPOSITMASS calls names the same few species over and over: check each text once.
+  const known = SPECIES_MASSES.get(species);
+  if (known !== undefined) return known;
   const meant = miscapitalisedElement(species);
   if (meant !== undefined) {
     throw new InputError(
       `"${species.trim()}" reads as two elements (${meant.read}); did you mean ${meant.element}? Element symbols are case-sensitive: write "${meant.element}", or a molar mass in g/mol`,
     );
   }
-  return molarMass(species);
+  const m = molarMass(species);
+  if (SPECIES_MASSES.size >= 1000) SPECIES_MASSES.clear();
+  SPECIES_MASSES.set(species, m);
+  return m;
 }
+
+/** Molar masses of species texts already accepted, by text as given (refused texts are not kept). */
+const SPECIES_MASSES = new Map<string, number>();
 
 /**
  * When a species text is two capital letters (a charge or phase mark may follow) that are two
