@@ -29,7 +29,11 @@ module.exports = (env, argv) => {
     cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs')] } },
     target: ['web', 'es2020'],
     entry: {
-      functions: ['./functions/entry.ts', ...declarations],
+      // One entry module that imports entry.ts and then every declaration, so that webpack joins the
+      // whole bundle into one scope. As separate entries each module stayed a module of its own, and
+      // every use of another module's export went through a getter: NERNST over 10^6 cells took
+      // 1.6 times as long (BENCHMARKS.md, run F).
+      functions: `data:text/javascript,${['./functions/entry.ts', ...declarations].map((f) => `import ${JSON.stringify(f)};`).join('')}`,
       taskpane: './taskpane/main.ts',
     },
     output: {

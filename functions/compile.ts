@@ -110,8 +110,33 @@ function readElement(r: ElementReader, raw: unknown, memo: Map<string, unknown> 
   return v;
 }
 
-/** Compiles a spec into the function Excel calls. */
+/**
+ * The function Excel calls for a spec. Its element loops are compiled on its first call, not when
+ * the bundle starts: a workbook calls a few of the functions, and start-up should not pay for all.
+ */
 export function worksheet(spec: FunctionSpec): WorksheetFunction {
+  let evaluate: ((raws: unknown[]) => Cell[][]) | null = null;
+  const safeEvaluate = (raws: unknown[]): Cell[][] => {
+    try {
+      return (evaluate ??= compile(spec))(raws);
+    } catch (e) {
+      return [[toExcelError(e)]];
+    }
+  };
+
+  const fn: WorksheetFunction = (...raws: unknown[]) => {
+    if (spec.usesTable) {
+      const pending = tablePending();
+      if (pending !== null) return pending.then(() => safeEvaluate(raws), () => safeEvaluate(raws));
+    }
+    return safeEvaluate(raws);
+  };
+  registry.set(spec.id, { spec, fn });
+  return fn;
+}
+
+/** Compiles a spec into its evaluation: converted arguments, broadcast, results checked. */
+function compile(spec: FunctionSpec): (raws: unknown[]) => Cell[][] {
   const n = spec.args.length;
   const names = spec.args.map((a) => a.name);
   const isList = spec.args.map((a) => a.kind === 'numberList' || a.kind === 'textList');
@@ -331,21 +356,5 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
     return out;
   };
 
-  const safeEvaluate = (raws: unknown[]): Cell[][] => {
-    try {
-      return evaluate(raws);
-    } catch (e) {
-      return [[toExcelError(e)]];
-    }
-  };
-
-  const fn: WorksheetFunction = (...raws: unknown[]) => {
-    if (spec.usesTable) {
-      const pending = tablePending();
-      if (pending !== null) return pending.then(() => safeEvaluate(raws), () => safeEvaluate(raws));
-    }
-    return safeEvaluate(raws);
-  };
-  registry.set(spec.id, { spec, fn });
-  return fn;
+  return evaluate;
 }

@@ -265,8 +265,26 @@ function parseGroup(s: string, whole: string): Record<string, number> {
   return stack[0].counts;
 }
 
-/** Parses one species (no stoichiometric coefficient). Throws InputError on text it cannot read. */
+/** Species already read, by text as given (texts that cannot be read are not kept); at most SPECIES_MEMO. */
+const speciesMemo = new Map<string, Species>();
+const SPECIES_MEMO = 4096;
+
+/**
+ * Parses one species (no stoichiometric coefficient). Throws InputError on text it cannot read.
+ * A text read before gives the same (immutable) species again: building a table reads "H+", "H2O"
+ * and "e-" in row after row, and each couple's species again in its key.
+ */
 export function parseSpecies(text: string): Species {
+  let sp = speciesMemo.get(text);
+  if (sp === undefined) {
+    sp = readSpecies(text);
+    if (speciesMemo.size >= SPECIES_MEMO) speciesMemo.clear();
+    speciesMemo.set(text, sp);
+  }
+  return sp;
+}
+
+function readSpecies(text: string): Species {
   const { body, charge, phase, chargeFromDigit } = splitSpecies(text);
   if (body === 'e' || body === 'e−') {
     if (charge !== -1) throw new InputError(`the electron is written "e-"; got "${text}"`);

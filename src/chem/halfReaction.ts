@@ -57,7 +57,13 @@ interface Rational {
 function gcd(a: number, b: number): number {
   a = Math.abs(a);
   b = Math.abs(b);
-  while (b) [a, b] = [b, a % b];
+  // no destructuring swap: the table is built once, in code not yet optimized, where [a, b] = [b, a % b]
+  // allocates an array and walks its iterator on every step
+  while (b) {
+    const r = a % b;
+    a = b;
+    b = r;
+  }
   return a;
 }
 

@@ -21,22 +21,33 @@ export function speciesMolarMass(species: string | number): number {
     if (!(species > 0) || !Number.isFinite(species)) throw new InputError(`a molar mass must be a finite number > 0 g/mol; got ${species}`);
     return species;
   }
+  // A range of DEPOSITMASS calls names the same few species over and over: check each text once.
+  const known = SPECIES_MASSES.get(species);
+  if (known !== undefined) return known;
   const meant = miscapitalisedElement(species);
   if (meant !== undefined) {
     throw new InputError(
       `"${species.trim()}" reads as two elements (${meant.read}); did you mean ${meant.element}? Element symbols are case-sensitive: write "${meant.element}", or a molar mass in g/mol`,
     );
   }
+  let m: number;
   try {
-    return molarMass(species);
+    m = molarMass(species);
   } catch (e) {
     // "Zn0.86Ni0.14": every element with a count and some count a decimal is an alloy composition
-    if (e instanceof InputError && /^\s*(?:[A-Z][a-z]?\s*\d*\.?\d+\s*)+$/.test(species) && /\d\.\d/.test(species)) {
+    // (the count pattern has one way to match each run of digits, so a long text cannot backtrack)
+    if (e instanceof InputError && /^\s*(?:[A-Z][a-z]?\s*(?:\d+(?:\.\d*)?|\.\d+)\s*)+$/.test(species) && /\d\.\d/.test(species)) {
       throw new InputError(`${e.message}; "${species.trim()}" looks like an alloy: give its equivalent weight, ALLOYEQUIV("Zn86Ni14", 2) (mass percent), as the molar mass with n = 1, or use ALLOYPLATETIME`);
     }
     throw e;
   }
+  if (SPECIES_MASSES.size >= 1000) SPECIES_MASSES.clear();
+  SPECIES_MASSES.set(species, m);
+  return m;
 }
+
+/** Molar masses of species texts already accepted, by text as given (refused texts are not kept). */
+const SPECIES_MASSES = new Map<string, number>();
 
 /**
  * When a species text is two capital letters (a charge or phase mark may follow) that are two

@@ -75,3 +75,16 @@ describe('parseFormula', () => {
     expect(() => parseFormula('')).toThrow(InputError);
   });
 });
+
+describe('parseSpecies read again', () => {
+  it('gives the same species for a text read before, and refuses a refused text every time', () => {
+    const first = parseSpecies('Cr2O7^2-');
+    for (let i = 0; i < 3; i++) {
+      // dichromate: 2 Cr, 7 O, charge 2− (common practice)
+      expect(parseSpecies('Cr2O7^2-')).toEqual({ body: 'Cr2O7', charge: -2, phase: undefined, elements: { Cr: 2, O: 7 }, isElectron: false, key: 'Cr2O72-' });
+      expect(parseSpecies('Cr2O7^2-')).toEqual(first);
+      expect(() => parseSpecies('Hg2^2')).toThrow(InputError);
+      expect(() => parseSpecies('Qq2+')).toThrow(/not an element symbol/);
+    }
+  });
+});

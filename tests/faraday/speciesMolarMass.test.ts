@@ -27,6 +27,15 @@ describe('miscapitalised element symbols in the deposition functions', () => {
     expect(miscapitalisedElement('Co')).toBeUndefined();
   });
 
+  it('gives the same answers when texts repeat (each accepted text is remembered; refusals never are)', () => {
+    for (let i = 0; i < 3; i++) {
+      expect(speciesMolarMass('Cu')).toBe(63.546); // IUPAC CIAAW 2021 abridged (data/atomic-weights.json)
+      expect(() => speciesMolarMass('CU')).toThrow('did you mean Cu?');
+      expect(() => speciesMolarMass('Cu SO4')).toThrow(InputError);
+      expect(speciesMolarMass('CuSO4·5H2O')).toBe(molarMass('CuSO4·5H2O'));
+    }
+  });
+
   it('MOLARMASS itself keeps CO as carbon monoxide', () => {
     expect(molarMass('CO')).toBeCloseTo(12.011 + 15.999, 9); // IUPAC CIAAW 2021 abridged values
   });

@@ -12,6 +12,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseSpecies } from '../../src/chem/formula';
+import { speciesMolarMass } from '../../src/faraday/speciesMolarMass';
 import { parseHalfReaction } from '../../src/chem/halfReaction';
 import { importCsv } from '../../src/store/csv';
 import { normalizeCoupleKey } from '../../src/table/keys';
@@ -38,6 +39,7 @@ function hostile(n: number): Record<string, string> {
     'digits then comma': `${'1'.repeat(n - 1)},`,
     'element then digits, x': `C${'1'.repeat(n - 2)}x`,
     blanks: `${' '.repeat(n - 1)}+`,
+    'element-count runs, x': `${'Zn11111'.repeat(Math.floor((n - 1) / 7))}x`.padEnd(n, '1'),
   };
 }
 
@@ -105,6 +107,7 @@ describe('every parser runs in linear time on the worst inputs we could build, a
   check('CSV key', () => MAX.key, (t) => importCsv(`row_type,key,half_reaction,potential_V,source\ncouple,"${t.replace(/"/g, '""')}/Cu",Cu2+ + 2e- -> Cu,0.34,x`));
   check('CSV quoted field of line breaks', () => MAX.formula, (t) => importCsv(`row_type,key,half_reaction,potential_V,source,note\ncouple,Cu2+/Cu,Cu2+ + 2e- -> Cu,0.34,x,"${'\n'.repeat(t.length - 1)}x"`));
   check('worksheet numeric text (NERNST)', () => MAX.number, (t) => NERNST([[t]], [[2]], [[1]], null));
+  check('deposition species (speciesMolarMass, with its alloy hint)', () => MAX.formula, (t) => speciesMolarMass(t));
   check('worksheet formula (MOLARMASS)', () => MAX.formula, (t) => MOLARMASS([[t]]));
   check('worksheet couple key (STDPOTENTIAL)', () => MAX.formula, (t) => STDPOTENTIAL([[`${t}/Cu`]], null));
 });
