@@ -66,7 +66,7 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(one(await call('CURRENTDEMAND', 1000, 0.1, 0.3))).toBeCloseTo(30, 12);
     expect(one(await call('CURRENTDEMAND', 100, 0.1, null))).toBeCloseTo(10, 12);
   });
-  it('ANODERESISTANCE (Table 10-7), ANODEOUTPUT (§7.7), ANODECOUNT (§7.8), ANODEDATA (Table 10-6)', async () => {
+  it('ANODERESISTANCE (Table 10-7), ANODEOUTPUT (§7.7), ANODECOUNT (§7.8), ANODEDATA (handbook zinc; #N/A naming Table 10-6 for Al-Zn-In)', async () => {
     expect(one(await call('ANODERESISTANCE', 'long-standoff', 0.3, 2, 0.1, null, null, null, null))).toBeCloseTo(0.0807399, 6);
     expect(one(await call('ANODERESISTANCE', 'bracelet', 0.3, null, null, null, null, 0.5, null))).toBeCloseTo(0.1336432, 6);
     expect(isError(one(await call('ANODERESISTANCE', 'long-standoff', 0.3, 0.3, 0.1, null, null, null, null)), '#VALUE!')).toBe(true);
