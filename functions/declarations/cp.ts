@@ -5,7 +5,7 @@
 import * as F from '../families/cp';
 
 /**
- * The cathodic-protection criterion the standards state for the reference electrode used, in V on that electrode (a criterion, never a verdict): −0.85 V CSE (NACE/AMPP SP0169; ISO 15589-1 Table 1; EN 12954), −0.80 V Ag/AgCl/seawater (DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2), +0.25 V vs zinc; "polarisation" gives the 100 mV shift; "limit" the most negative potential in seawater (−1.10 V Ag/AgCl, ISO 15589-2 §5.2). Compare a reading with the criterion stated for its own electrode, not a converted one; the clause and source are in the reference and in data/cp-criteria.json. #N/A with where to look for conditions whose value Cellwright does not hold (anaerobic/SRB, high temperature, high-strength steels).
+ * The cathodic-protection criterion the standards state for the reference electrode used, in V on that electrode (a criterion, never a verdict): −0.85 V CSE (NACE/AMPP SP0169; ISO 15589-1 Table 1; EN 12954), −0.80 V Ag/AgCl/seawater (DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2), +0.25 V vs zinc; "polarisation" gives the 100 mV shift. Compare a reading with the criterion stated for its own electrode, not a converted one; the clause and source are in the reference and in data/cp-criteria.json. #N/A with where to look for conditions whose value Cellwright does not hold (anaerobic/SRB, high temperature, high-strength steels, the most negative potential "limit").
  * @customfunction PROTECTIONCRITERION
  * @helpurl https://localhost:3000/docs/functions.html#protectioncriterion
  * @param electrode Reference electrode of the reading: "CSE", "Ag/AgCl/seawater" or "Zn/seawater".
@@ -154,10 +154,10 @@ function anodecount(current_demand_A: any[][], output_per_anode_A: any[][], tota
 }
 
 /**
- * Design data of a galvanic-anode material from data/anodes.json (DNV-RP-B401 Table 10-6 for Al-Zn-In and Zn; a handbook for Mg): capacity in A·h/kg, closed-circuit potential in V, its reference electrode, or the source.
+ * Data of a galvanic-anode material from data/anodes.json (zinc in seawater and magnesium, from handbooks): capacity in A·h/kg, closed-circuit potential in V, its reference electrode, or the source. Al-Zn-In and anodes in sediment answer #N/A: take their design values from DNV-RP-B401 Table 10-6, ISO 15589-2 or the supplier's qualified data. The supplier's data for the alloy bought take precedence.
  * @customfunction ANODEDATA
  * @helpurl https://localhost:3000/docs/functions.html#anodedata
- * @param anode "Al-Zn-In/seawater", "Al-Zn-In/sediment", "Zn/seawater", "Zn/sediment", "Mg/standard" or "Mg/high-potential".
+ * @param anode "Zn/seawater", "Mg/standard" or "Mg/high-potential" ("Al-Zn-In/…" and "…/sediment" answer #N/A naming the standard).
  * @param [property] "capacity", "potential", "scale" or "source" (default "capacity").
  * @returns A number or text.
  */

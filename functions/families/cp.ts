@@ -40,7 +40,7 @@ const V = (name: string, x: number): number => plausible(name, x, PLAUSIBLE.volt
 
 export const PROTECTIONCRITERION = worksheet({
   id: 'PROTECTIONCRITERION',
-  description: 'The cathodic-protection criterion the standards state for the reference electrode used, in V on that electrode (a criterion, never a verdict): −0.85 V CSE (NACE/AMPP SP0169; ISO 15589-1 Table 1; EN 12954), −0.80 V Ag/AgCl/seawater (DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2), +0.25 V vs zinc; "polarisation" gives the 100 mV shift; "limit" the most negative potential in seawater (−1.10 V Ag/AgCl, ISO 15589-2 §5.2). Compare a reading with the criterion stated for its own electrode, not a converted one; the clause and source are in the reference and in data/cp-criteria.json. #N/A with where to look for conditions whose value Cellwright does not hold (anaerobic/SRB, high temperature, high-strength steels).',
+  description: 'The cathodic-protection criterion the standards state for the reference electrode used, in V on that electrode (a criterion, never a verdict): −0.85 V CSE (NACE/AMPP SP0169; ISO 15589-1 Table 1; EN 12954), −0.80 V Ag/AgCl/seawater (DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2), +0.25 V vs zinc; "polarisation" gives the 100 mV shift. Compare a reading with the criterion stated for its own electrode, not a converted one; the clause and source are in the reference and in data/cp-criteria.json. #N/A with where to look for conditions whose value Cellwright does not hold (anaerobic/SRB, high temperature, high-strength steels, the most negative potential "limit").',
   args: [
     arg({ name: 'electrode', kind: 'electrode', unit: '', help: 'Reference electrode of the reading: "CSE", "Ag/AgCl/seawater" or "Zn/seawater".' }),
     text('condition', '"standard", "polarisation", "limit", "anaerobic", "hightemperature" or "highstrength" (default "standard").', 'standard'),
@@ -187,9 +187,9 @@ export const ANODECOUNT = worksheet({
 
 export const ANODEDATA = worksheet({
   id: 'ANODEDATA',
-  description: 'Design data of a galvanic-anode material from data/anodes.json (DNV-RP-B401 Table 10-6 for Al-Zn-In and Zn; a handbook for Mg): capacity in A·h/kg, closed-circuit potential in V, its reference electrode, or the source.',
+  description: 'Data of a galvanic-anode material from data/anodes.json (zinc in seawater and magnesium, from handbooks): capacity in A·h/kg, closed-circuit potential in V, its reference electrode, or the source. Al-Zn-In and anodes in sediment answer #N/A: take their design values from DNV-RP-B401 Table 10-6, ISO 15589-2 or the supplier\'s qualified data. The supplier\'s data for the alloy bought take precedence.',
   args: [
-    text('anode', '"Al-Zn-In/seawater", "Al-Zn-In/sediment", "Zn/seawater", "Zn/sediment", "Mg/standard" or "Mg/high-potential".'),
+    text('anode', '"Zn/seawater", "Mg/standard" or "Mg/high-potential" ("Al-Zn-In/…" and "…/sediment" answer #N/A naming the standard).'),
     text('property', '"capacity", "potential", "scale" or "source" (default "capacity").', 'capacity'),
   ],
   result: 'A number or text.',

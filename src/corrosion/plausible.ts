@@ -40,7 +40,7 @@ export const PLAUSIBLE = {
   /** A design or exposure time in years. */
   years: { lo: 0, hi: 200, range: '0 to 200 years', hints: [{ lo: 200, hi: 2e6, says: 'looks like hours or days; this argument is in years' }] },
   /** An anode capacity in A·h/kg. */
-  capacityAhKg: { lo: 100, hi: 3000, range: '100 to 3000 A·h/kg', hints: [{ lo: 0.1, hi: 3, says: 'looks like kA·h/kg or a fraction; this argument is A·h/kg (Al-Zn-In about 2000)' }] },
+  capacityAhKg: { lo: 100, hi: 3000, range: '100 to 3000 A·h/kg', hints: [{ lo: 0.1, hi: 3, says: 'looks like kA·h/kg or a fraction; this argument is A·h/kg (zinc about 780)' }] },
 } satisfies Record<string, Plausibility>;
 
 /**

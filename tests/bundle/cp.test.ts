@@ -20,7 +20,9 @@ describe('PROTECTIONCRITERION and SOURCE', () => {
   });
   it('conditions: 100 mV polarisation, the seawater limit, and #N/A naming the standard for SRB', async () => {
     expect(one(await call('PROTECTIONCRITERION', 'CSE', 'polarisation'))).toBe(0.1);
-    expect(one(await call('PROTECTIONCRITERION', 'Ag/AgCl/seawater', 'limit'))).toBe(-1.1); // ISO 15589-2 §5.2
+    const limit = one(await call('PROTECTIONCRITERION', 'Ag/AgCl/seawater', 'limit')); // ISO 15589-2 §5.2, not read: not held
+    expect(isError(limit, '#N/A')).toBe(true);
+    expect(msg(limit)).toMatch(/ISO 15589-2/);
     const srb = one(await call('PROTECTIONCRITERION', 'CSE', 'anaerobic'));
     expect(isError(srb, '#N/A')).toBe(true);
     expect(msg(srb)).toMatch(/ISO 15589-1/);
@@ -64,14 +66,17 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(one(await call('CURRENTDEMAND', 1000, 0.1, 0.3))).toBeCloseTo(30, 12);
     expect(one(await call('CURRENTDEMAND', 100, 0.1, null))).toBeCloseTo(10, 12);
   });
-  it('ANODERESISTANCE (Table 10-7), ANODEOUTPUT (§7.7), ANODECOUNT (§7.8), ANODEDATA (Table 10-6)', async () => {
+  it('ANODERESISTANCE (Table 10-7), ANODEOUTPUT (§7.7), ANODECOUNT (§7.8), ANODEDATA (handbook zinc; #N/A naming Table 10-6 for Al-Zn-In)', async () => {
     expect(one(await call('ANODERESISTANCE', 'long-standoff', 0.3, 2, 0.1, null, null, null, null))).toBeCloseTo(0.0807399, 6);
     expect(one(await call('ANODERESISTANCE', 'bracelet', 0.3, null, null, null, null, 0.5, null))).toBeCloseTo(0.1336432, 6);
     expect(isError(one(await call('ANODERESISTANCE', 'long-standoff', 0.3, 0.3, 0.1, null, null, null, null)), '#VALUE!')).toBe(true);
     expect(one(await call('ANODEOUTPUT', -0.8, -1.05, 0.125))).toBeCloseTo(2, 12);
     expect(one(await call('ANODECOUNT', 30, 2, null, null))).toBe(15);
-    expect(one(await call('ANODEDATA', 'Al-Zn-In/seawater', null))).toBe(2000);
-    expect(one(await call('ANODEDATA', 'Al-Zn-In/seawater', 'potential'))).toBe(-1.05);
+    expect(one(await call('ANODEDATA', 'Zn/seawater', null))).toBe(780); // Pipeline Rules of Thumb Handbook p. 219 Table 3: 354 A·h/lb
+    expect(one(await call('ANODEDATA', 'Zn/seawater', 'potential'))).toBe(-1.03); // same table: −1.03 V Ag/AgCl in seawater
+    const al = one(await call('ANODEDATA', 'Al-Zn-In/seawater', null)); // design value not read: #N/A naming the standard
+    expect(isError(al, '#N/A')).toBe(true);
+    expect(msg(al)).toMatch(/DNV-RP-B401 Table 10-6/);
   });
 });
 
@@ -112,7 +117,7 @@ describe('ranges: each function spills a column element by element, a bad elemen
     ['ANODERESISTANCE', ['bracelet', 0.3, null, null, null, null, 0.5, null], 1, [0.2, 0.3, 1.5, -1], 3],
     ['ANODEOUTPUT', [-0.8, -1.05, 0.125], 1, [-1.05, -1.0, -1.7, -0.7], 3],
     ['ANODECOUNT', [30, 2, null, null], 0, [10, 30, 31, -1], 3],
-    ['ANODEDATA', ['Al-Zn-In/seawater', 'capacity'], 0, ['Al-Zn-In/seawater', 'Zn/seawater', 'Mg/standard', 'Cd'], 3],
+    ['ANODEDATA', ['Zn/seawater', 'capacity'], 0, ['Zn/seawater', 'Mg/standard', 'Mg/high-potential', 'Al-Zn-In/seawater'], 3],
     ['GROUNDBEDRESISTANCE', ['vertical', 30, 2, 0.1, null, null, null], 1, [10, 30, 100, -5], 3],
     ['RECTIFIERVOLTAGE', [10, 1.5, 2], 0, [5, 10, 20, -1], 3],
     ['CABLEDROP', [10, 200, 1.15], 1, [100, 200, 400, -1], 3],

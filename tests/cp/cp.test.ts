@@ -44,8 +44,9 @@ describe('protectionCriterion: criteria as the standards state them, per electro
     expect(r.value).toBe(0.1); // MIL-HDBK-1004/10 §3.3.1.1(b); NACE/AMPP SP0169
     expect(r.kind).toBe('shift');
   });
-  it('the most negative potential in seawater', () => {
-    expect(protectionCriterion('Ag/AgCl/seawater', 'limit').value).toBe(-1.1); // ISO 15589-2 §5.2 (as copied in a secondary source)
+  it('the most negative potential in seawater is not held (its clause was not read): not-found naming the standards', () => {
+    expect(() => protectionCriterion('Ag/AgCl/seawater', 'limit')).toThrow(NotFoundError);
+    expect(() => protectionCriterion('Ag/AgCl/seawater', 'most negative')).toThrow(/ISO 15589-2 §5\.2.*DNV-RP-B401/);
   });
   it('conditions whose value was not read, and other electrodes, answer not-found with where to look', () => {
     expect(() => protectionCriterion('CSE', 'SRB')).toThrow(/sulfate-reducing/);
@@ -55,7 +56,7 @@ describe('protectionCriterion: criteria as the standards state them, per electro
     expect(() => protectionCriterion('CSE', 'wet')).toThrow(InputError);
   });
   it('the #N/A messages name the standards and fit an Excel error message whole (300 characters)', () => {
-    for (const c of ['anaerobic', 'hightemperature', 'highstrength']) {
+    for (const c of ['limit', 'anaerobic', 'hightemperature', 'highstrength']) {
       let m = '';
       try {
         protectionCriterion('CSE', c);
@@ -156,14 +157,29 @@ describe('galvanic-anode design (DNV-RP-B401)', () => {
     expect(anodeCount(31, 2, null, null)).toBe(16);
     expect(anodeCount(30, 2, 1216.67, 50)).toBe(25);
   });
-  it('anode data table (DNV-RP-B401 Table 10-6 as copied in a secondary source; Roberge 2008 p. 555)', () => {
-    expect(anodeData('Al-Zn-In', 'capacity')).toBe(2000);
-    expect(anodeData('Al-Zn-In/seawater', 'potential')).toBe(-1.05);
+  it('anode data table (Pipeline Rules of Thumb Handbook p. 219 Table 3; Roberge 2008 p. 555)', () => {
+    // zinc in seawater: 354 A·h/lb and −1.03 V Ag/AgCl (Pipeline Rules of Thumb Handbook, p. 219, Table 3)
     expect(anodeData('zinc', 'capacity')).toBe(780);
+    expect(Math.abs((anodeData('Zn/seawater', 'capacity') as number) * 0.45359237 - 354)).toBeLessThan(0.5);
+    expect(anodeData('Zn/seawater', 'potential')).toBe(-1.03);
+    expect(anodeData('Zn/seawater', 'scale')).toBe('Ag/AgCl/seawater');
     expect(anodeData('Mg', 'scale')).toBe('CSE');
     // MIL-HDBK-1004/10 galvanic example: S = 8.8 lb/(A·yr) theoretical, E = 0.50 → 1097 A·h/kg useful
     expect(Math.abs((anodeData('Mg', 'capacity') as number) / ((8760 / (8.8 * 0.45359237)) * 0.5) - 1)).toBeLessThan(0.005);
     expect(() => anodeData('Cd', 'capacity')).toThrow(NotFoundError);
+  });
+  it('Al-Zn-In and anodes in sediment, whose design values were not read, answer not-found naming the standard', () => {
+    for (const a of ['Al-Zn-In/seawater', 'Al-Zn-In', 'aluminium', 'Al-Zn-In/sediment', 'Zn/sediment']) {
+      let m = '';
+      try {
+        anodeData(a, 'capacity');
+      } catch (e) {
+        expect(e, a).toBeInstanceOf(NotFoundError);
+        m = (e as Error).message;
+      }
+      expect(m, a).toMatch(/DNV-RP-B401 Table 10-6, ISO 15589-2 or the supplier's qualified data/);
+      expect(m.length, a).toBeLessThanOrEqual(300);
+    }
   });
 });
 
