@@ -6,6 +6,7 @@ import { when, plural } from './format';
 import { clearMessages, confirmAction, act } from './notices';
 import { builtin, model, ui } from './state';
 import { renderAll } from './taskpane';
+import { dataModel, pinDataSet } from './dataSet';
 
 export function fact(name: string, value: Child, cls?: string): Child[] {
   return [h('dt', {}, name), h('dd', cls === undefined ? {} : { class: cls }, value)];
@@ -50,9 +51,9 @@ export function renderInUse(): void {
       h(
         'div',
         { class: 'actions' },
-        h('button', { type: 'button', id: 'pin', class: 'primary', 'aria-describedby': 'pin-hint', onclick: () => void act(() => model.pin()) }, 'Pin to this workbook'),
+        h('button', { type: 'button', id: 'pin', class: 'primary', 'aria-describedby': 'pin-hint', onclick: () => void act(pinDataSet) }, 'Pin to this workbook'),
       ),
-      h('p', { class: 'hint', id: 'pin-hint' }, 'Stores the built-in table in this workbook, so later add-in updates do not change its results. Editing a row does the same.'),
+      h('p', { class: 'hint', id: 'pin-hint' }, 'Stores the built-in table and the rest of the data set (atomic weights, species data, constants) in this workbook, so later add-in updates do not change its results. Editing a row pins the table only.'),
       functionsLine(),
     );
     return;
@@ -137,6 +138,7 @@ export async function reload(): Promise<void> {
   ui.busy = true;
   try {
     await model.load();
+    await dataModel.load();
     clearMessages();
     ui.ready = true;
     ui.loadError = null;

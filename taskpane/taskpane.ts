@@ -19,10 +19,11 @@ import { checkElsewhere } from './notices';
 import { builtin, model, CHECK_EVERY_MS, KINDS, ui } from './state';
 import { pollWhileVisible } from './visiblePolling';
 import { renderEph, wireEph } from './eph';
+import { renderDataSet } from './dataSet';
 import { buildTable } from '../src/table/table';
 import type { PotentialTable } from '../src/table/types';
 
-export const TABS = ['couples', 'electrodes', 'files', 'eph', 'about'] as const;
+export const TABS = ['couples', 'electrodes', 'files', 'eph', 'data', 'about'] as const;
 
 export function selectTab(name: (typeof TABS)[number], focus: boolean): void {
   for (const t of TABS) {
@@ -64,6 +65,7 @@ export function renderAll(): void {
   renderInUse();
   for (const kind of KINDS) renderList(kind);
   renderEph();
+  renderDataSet();
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {
