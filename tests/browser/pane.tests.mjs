@@ -901,7 +901,7 @@ export const tests = [
       assert.match(await text(page, '#data-parts li[data-part="atomicweights"]'), /Atomic weights built-in Version .* 84 rows .*Read-only\. Source: IUPAC/);
       await fitsWidth(page);
       await labelled(page);
-      await shot(page, '25-data-set-built-in');
+      await shot(page, '25-data-set-built-in', '#tab-data');
       await page.click('#pin-data-set');
       await waitIdle(page);
       assert.match(await notice(page), /Pinned: the built-in table .* reference data .* is now stored in this workbook/);
@@ -915,7 +915,7 @@ export const tests = [
       // A pinned copy of the built-in data has the built-in data set's checksum.
       assert.equal(await page.getAttribute('#data-set-checksum', 'title'), status.dataset.checksum);
       assert.ok(Math.abs((await plateNi(page)) - plateMinutes(NI)) < 1e-9);
-      await shot(page, '26-data-set-pinned');
+      await shot(page, '26-data-set-pinned', '#tab-data');
       await reopen(page);
       await page.click('#tab-data');
       assert.equal(await page.locator('#data-parts .tag.pinned').count(), 10);
@@ -943,7 +943,7 @@ export const tests = [
       assert.match(newer, /Updating would change 1 part: Atomic weights Ni: atomicWeight: 58\.6934 → 58\.693 version: 2025\.1 → 2026\.1 Until/);
       assert.match(await text(page, '#data-parts li[data-part="atomicweights"]'), /pinned Version 2025\.1/);
       await fitsWidth(page);
-      await shot(page, '27-newer-built-in-data-atomic-weight');
+      await shot(page, '27-newer-built-in-data-atomic-weight', '#tab-data');
       await page.click('#update-data');
       await confirmDialog(page, true);
       await waitIdle(page);
@@ -969,7 +969,7 @@ export const tests = [
       assert.match(await text(page, '#data-unreadable-reason'), /checksum of the pinned part "Atomic weights" does not match its content/);
       assert.equal(await page.evaluate((k) => window.__stubWorkbook.file().settings[k], DATA_KEY), damaged);
       await fitsWidth(page);
-      await shot(page, '28-data-set-unreadable');
+      await shot(page, '28-data-set-unreadable', '#tab-data');
       await page.click('#data-remove');
       await confirmDialog(page, true);
       await waitIdle(page);
