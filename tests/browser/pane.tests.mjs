@@ -929,7 +929,7 @@ export const tests = [
       const page = await openPane(open);
       await page.click('#pin');
       await waitIdle(page);
-      // The workbook was pinned with an older data set in which nickel weighed 58.6934 g/mol.
+      // The workbook was pinned with an older data set in which nickel weighed 58.6934 g/mol (an earlier IUPAC value, from memory).
       const doc = JSON.parse(await page.evaluate((k) => window.__stubWorkbook.file().settings[k], DATA_KEY));
       doc.version = '2025.1';
       doc.parts.atomicweights.content.version = '2025.1';

@@ -110,7 +110,7 @@ describe('TABLEINFO with a workbook table (the channel the pane and the start-up
     expect(f('pinned')).toBe(['table', ...DATA_PARTS].join(', '));
     expect(f('datasetchecksum')).toBe(builtinSet);
     const aw = JSON.parse(JSON.stringify(BUILTIN_PARTS.atomicweights)) as typeof BUILTIN_PARTS.atomicweights;
-    aw.elements[0].atomicWeight = 1.00794;
+    aw.elements[0].atomicWeight = 1.00794; // hydrogen as IUPAC gave it before the 2009 intervals (from memory)
     usePinnedValue(writePinnedText({ version: '2025.1', pinnedAt: '2025-03-04T12:00:00.000Z', parts: { atomicweights: aw } }));
     expect(f('pinned')).toBe('table, atomicweights');
     expect(f('dataset')).toBe('2025.1');

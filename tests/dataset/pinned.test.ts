@@ -8,7 +8,10 @@ import { sha256Hex } from '../../src/store/sha256';
 const AT = '2026-01-05T10:00:00.000Z';
 const clone = <T>(x: T): T => JSON.parse(JSON.stringify(x)) as T;
 
-/** A text pinned from data with one atomic weight changed, and every checksum made to fit (as an older add-in would have written it). */
+/**
+ * A text pinned from data with nickel's atomic weight changed, every checksum made to fit (as an older add-in
+ * would have written it). The tests use 58.6934 g/mol, an earlier IUPAC value (from memory), or a damaged one.
+ */
 function pinnedWithNickel(w: number, version = '2025.1'): string {
   const aw = clone(BUILTIN_PARTS.atomicweights);
   aw.elements.find((e) => e.symbol === 'Ni')!.atomicWeight = w;
@@ -34,7 +37,7 @@ describe('pinned data: stored form', () => {
 
   it('each part has its own checksum and a changed part changes only its own and the overall one', () => {
     const a = readPinnedText(writePinnedText({ version: DATASET_VERSION, pinnedAt: AT }));
-    const b = readPinnedText(pinnedWithNickel(58.7));
+    const b = readPinnedText(pinnedWithNickel(58.6934));
     if (!a.ok || !b.ok) throw new Error('unreadable');
     const differing = DATA_PARTS.filter((p) => a.pinned.checksums[p] !== b.pinned.checksums[p]);
     expect(differing).toEqual(['atomicweights']);

@@ -28,8 +28,8 @@ const BUILTIN_DATA = partChecksum({ ...builtinPartChecksums() });
 const plateMinutes = (M: number): number => (25e-4 * 8.908 * 2 * AVOGADRO_PER_MOL * ELEMENTARY_CHARGE_C) / (M * 0.04) / 60;
 /** Ni 58.693 g/mol: IUPAC CIAAW 2021 abridged standard atomic weight (data/atomic-weights.json). */
 const NI = 58.693;
-/** An invented "newer" built-in weight for the test only: no source, it stands for any change. */
-const NI_CHANGED = 60;
+/** The built-in weight as an earlier add-in could have had it: 58.6934 g/mol, an earlier IUPAC value (from memory); it stands for any change. */
+const NI_CHANGED = 58.6934;
 
 async function startRuntime(): Promise<{ PLATETIME: Fn; STDPOTENTIAL: Fn; MOLARMASS: Fn }> {
   await import('../../functions/runtime');
