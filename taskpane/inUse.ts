@@ -17,6 +17,7 @@ export function functionsLine(): HTMLElement {
   let text: string;
   if (st === undefined) text = 'Worksheet functions: not running in this page; they read the stored table when the workbook opens.';
   else if (st.state === 'loading') text = 'Worksheet functions: reading the workbook’s table…';
+  else if (st.state === 'unreadable' && (st.reason ?? '').startsWith('its pinned data set')) text = 'Worksheet functions: answer #N/A until the workbook’s pinned data (Data set tab) is repaired or removed.';
   else if (st.state === 'unreadable') text = 'Worksheet functions: answer #N/A for table look-ups until the table is repaired or reset.';
   else if (st.state === 'builtin') text = `Worksheet functions: use the built-in table ${st.version ?? ''}.`;
   else text = `Worksheet functions: use this workbook’s table (revision ${st.revision ?? '?'}).`;
