@@ -125,10 +125,11 @@ export function worksheet(spec: FunctionSpec): WorksheetFunction {
   };
 
   const fn: WorksheetFunction = (...raws: unknown[]) => {
-    if (spec.usesTable) {
-      const pending = tablePending();
-      if (pending !== null) return pending.then(() => safeEvaluate(raws), () => safeEvaluate(raws));
-    }
+    // While the workbook's table and pinned data are being read at start-up, every function waits:
+    // the pinned data (atomic weights, species, constants) is read by functions that never look at
+    // the table. One null check per call otherwise.
+    const pending = tablePending();
+    if (pending !== null) return pending.then(() => safeEvaluate(raws), () => safeEvaluate(raws));
     return safeEvaluate(raws);
   };
   registry.set(spec.id, { spec, fn });

@@ -19,8 +19,15 @@
  *     asks for); when they differ, or nothing is recorded, the workbook is recalculated once (full) and
  *     the table recorded, so results saved under another table (an older built-in one, a table edited
  *     elsewhere) do not stay in the cells silently.
+ *  7. the workbook's pinned data (the data set's parts besides the table, settings key
+ *     cellwright.pinnedData) is read with the table and used with it in one step (functions/dataHost.ts);
+ *     the data the results were computed with is recorded under cellwright.computedWithData and checked
+ *     at start-up like the table's record, so an add-in update that changes built-in atomic weights
+ *     recalculates an unpinned workbook once.
  */
 import { hostStatus, installFunctionsHost, installReadFailure, installStoredValue, lastStoredValue, readTicket, startTableLoad } from './workbookHost';
+import { lastPinnedValue } from './dataHost';
+import { readComputedWithData, readPinnedValue, recordComputedWithData } from '../workbook/pinnedData';
 import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll, sameStoredValue } from '../workbook/store';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
@@ -35,19 +42,29 @@ class NoAnswer extends Error {}
 let inExcel = false;
 /** The table setting as last read from the workbook: the settings-changed event fires for every setting, the table's only matters. */
 let lastRead: unknown = undefined;
+/** The pinned-data setting as last read. */
+let lastPinnedRead: unknown = undefined;
 /** True once the start-up read has passed its time-out (its late answer is then installed here). */
 let timedOut = false;
 
-/** Reads the stored value once Office is ready; null when not running in Excel (no workbook to read). */
-async function readAtStartup(): Promise<unknown> {
+/** Reads the stored values (table, pinned data) once Office is ready; nulls when not running in Excel (no workbook to read). */
+async function readAtStartup(): Promise<{ table: unknown; pinned: unknown }> {
   const info = await Office.onReady();
-  if (info.host !== Office.HostType.Excel || typeof Excel === 'undefined') return null;
+  if (info.host !== Office.HostType.Excel || typeof Excel === 'undefined') return { table: null, pinned: null };
   if (!Office.context.requirements.isSetSupported('ExcelApi', '1.4')) {
     throw new Error('this version of Excel cannot read workbook settings (ExcelApi 1.4 is needed)');
   }
   inExcel = true;
   lastRead = await readStoredValue();
-  return lastRead;
+  lastPinnedRead = await readPinnedValue();
+  return { table: lastRead, pinned: lastPinnedRead };
+}
+
+/** Recalculates the workbook fully and records the table and the data the results are now computed with. */
+async function recalculate(): Promise<void> {
+  const s = hostStatus();
+  await recalculateAll(computedWithOf(s));
+  if (s.state !== 'loading' && s.dataChecksum !== undefined) await recordComputedWithData(s.dataChecksum);
 }
 
 function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
@@ -77,25 +94,30 @@ function withTimeout<T>(p: Promise<T>, ms: number): Promise<T> {
 async function readChanged(): Promise<void> {
   const ticket = readTicket();
   let value: unknown;
+  let pinned: unknown;
   try {
     value = await readStoredValue();
+    pinned = await readPinnedValue();
   } catch (e) {
     console.error(`Cellwright: reading the changed ${TABLE_SETTING_KEY} setting failed`, e);
     const why = e instanceof Error ? e.message : String(e);
-    if (installReadFailure(ticket, `the table was changed elsewhere and reading it failed (${why}); open the task pane to read it again`)) await recalculateAll(computedWithOf(hostStatus()));
+    if (installReadFailure(ticket, `the table was changed elsewhere and reading it failed (${why}); open the task pane to read it again`)) await recalculate();
     return;
   }
-  if (sameStoredValue(value, lastRead)) return;
+  if (sameStoredValue(value, lastRead) && sameStoredValue(pinned, lastPinnedRead)) return;
   lastRead = value;
-  if (sameStoredValue(value, lastStoredValue())) return;
-  if (installStoredValue(ticket, value)) await recalculateAll(computedWithOf(hostStatus()));
+  lastPinnedRead = pinned;
+  if (sameStoredValue(value, lastStoredValue()) && sameStoredValue(pinned, lastPinnedValue())) return;
+  if (installStoredValue(ticket, value, pinned)) await recalculate();
 }
 
 /** Recalculates once when the workbook's results were computed with another table than the one in use. */
 async function recalculateIfStale(): Promise<void> {
-  const now = computedWithOf(hostStatus());
-  if (now === undefined || (await readComputedWith()) === now) return;
-  await recalculateAll(now);
+  const s = hostStatus();
+  const now = computedWithOf(s);
+  if (now === undefined) return;
+  if ((await readComputedWith()) === now && (s.dataChecksum === undefined || (await readComputedWithData()) === s.dataChecksum)) return;
+  await recalculate();
 }
 
 async function watchForChanges(): Promise<void> {
@@ -119,7 +141,7 @@ function start(): void {
     async (value) => {
       await load.done;
       // The answer came after the time-out: use it now, unless the pane has handed a table over since.
-      if (timedOut && installStoredValue(load.generation, value)) await recalculateAll(computedWithOf(hostStatus()));
+      if (timedOut && installStoredValue(load.generation, value.table, value.pinned)) await recalculate();
       else if (inExcel) await recalculateIfStale();
       if (inExcel) await watchForChanges();
     },

@@ -22,7 +22,8 @@
 import { recordsOf } from '../src/store/rows';
 import { InstallOrder } from '../src/store/installOrder';
 import { type StoredRead, builtinChecksum, readStoredText } from '../src/store/stored';
-import { builtinTable } from '../src/table/builtin';
+import { BUILTIN_TABLE_SOURCE, builtinTable } from '../src/table/builtin';
+import { applyPinnedValue, dataPartsChecksum, dataSetInUse, lastPinnedValue, markDataUnreadable } from './dataHost';
 import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../workbook/channel';
 import { type TableInUse, beginTableLoad, setTableInUse, tableInUse, tablePending } from './context';
 
@@ -75,15 +76,32 @@ export function lastStoredValue(): unknown {
 export function hostStatus(): FunctionsHostStatus {
   if (tablePending() !== null) return { state: 'loading' };
   const t = tableInUse();
-  if (t.kind === 'unreadable') return { state: 'unreadable', reason: t.reason };
+  if (t.kind === 'unreadable') return { state: 'unreadable', reason: t.reason, dataChecksum: dataPartsChecksum() };
   if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinChecksum(recordsOf(t.table)) };
+  const ds = dataSetInUse(tablePart());
   return {
     state: t.kind,
+    dataset: { version: ds.version, checksum: ds.checksum, pinned: ds.parts.filter((p) => p.pinned).map((p) => p.name) },
+    dataChecksum: dataPartsChecksum(),
     version: t.table.version,
     ...(t.kind === 'workbook' ? { revision: details.revision } : {}),
     checksum: details.checksum,
     couples: t.table.couples.length,
     electrodes: t.table.electrodes.length,
+  };
+}
+
+/** The potential table's part of the data set in use (the table must be readable). */
+export function tablePart(): { pinned: boolean; version: string; checksum: string; rows: number; source: string } {
+  const t = tableInUse();
+  if (t.kind === 'unreadable') throw new Error('the table is unreadable');
+  const d = tableDetails();
+  return {
+    pinned: t.kind === 'workbook',
+    version: t.table.version,
+    checksum: d.checksum ?? '',
+    rows: t.table.couples.length + t.table.electrodes.length,
+    source: t.kind === 'builtin' ? BUILTIN_TABLE_SOURCE : 'the source given on each row',
   };
 }
 
@@ -100,6 +118,12 @@ export function useStoredValue(value: unknown): FunctionsHostStatus {
   return hostStatus();
 }
 
+/** Makes the functions use a pinned-data value now, with the table they use (a handover, like useStoredValue). */
+export function usePinnedValue(value: unknown): FunctionsHostStatus {
+  installStoredValue(readTicket(), lastValue ?? null, value);
+  return hostStatus();
+}
+
 /** A ticket for a read of the stored table that starts now (src/store/installOrder.ts). */
 export function readTicket(): number {
   return order.ticket();
@@ -110,8 +134,13 @@ export function readTicket(): number {
  * something already; table, status and the value seen change together, in one step. True when it was
  * installed.
  */
-export function installStoredValue(ticket: number, value: unknown): boolean {
-  return order.install(ticket, () => setTableInUse(tableForStoredValue(value)));
+export function installStoredValue(ticket: number, value: unknown, pinned: unknown = lastPinnedValue()): boolean {
+  return order.install(ticket, () => {
+    // The pinned data first: when it cannot be read, nothing of the workbook's data set is used.
+    const why = applyPinnedValue(pinned);
+    const table = tableForStoredValue(value);
+    setTableInUse(why === null ? table : { kind: 'unreadable', reason: shorten(`its pinned data set could not be read: ${why}`) });
+  });
 }
 
 /** Installs "unreadable" for a read of ticket `ticket` that failed (same ordering as installStoredValue). */
@@ -119,6 +148,7 @@ export function installReadFailure(ticket: number, reason: string): boolean {
   return order.install(ticket, () => {
     details = {};
     lastValue = READ_FAILED;
+    markDataUnreadable(shorten(reason));
     setTableInUse({ kind: 'unreadable', reason: shorten(reason) });
   });
 }
@@ -130,10 +160,10 @@ export function installReadFailure(ticket: number, reason: string): boolean {
  * message: the functions answer #N/A rather than use the built-in table. Returns the read's ticket and
  * a promise that settles when the load has.
  */
-export function startTableLoad(read: Promise<unknown>): { readonly generation: number; readonly done: Promise<void> } {
+export function startTableLoad(read: Promise<{ readonly table: unknown; readonly pinned: unknown }>): { readonly generation: number; readonly done: Promise<void> } {
   const mine = readTicket();
   const load = read.then(
-    (value) => void installStoredValue(mine, value),
+    (value) => void installStoredValue(mine, value.table, value.pinned),
     (e: unknown) => void installReadFailure(mine, `reading it failed: ${e instanceof Error ? e.message : String(e)}`),
   );
   return { generation: mine, done: beginTableLoad(load) };
@@ -141,7 +171,7 @@ export function startTableLoad(read: Promise<unknown>): { readonly generation: n
 
 /** Puts the channel on globalThis (once). */
 export function installFunctionsHost(): CellwrightFunctionsHost {
-  const host: CellwrightFunctionsHost = Object.freeze({ apiVersion: 1 as const, useStoredValue, status: hostStatus });
+  const host: CellwrightFunctionsHost = Object.freeze({ apiVersion: 1 as const, useStoredValue, usePinnedValue, status: hostStatus });
   globalThis.cellwrightFunctionsHost = host;
   return host;
 }

@@ -6,6 +6,7 @@ import { when, plural } from './format';
 import { clearMessages, confirmAction, confirmSigned, act } from './notices';
 import { builtin, model, ui } from './state';
 import { renderAll } from './taskpane';
+import { confirmAndPin, dataModel } from './dataSet';
 
 export function fact(name: string, value: Child, cls?: string): Child[] {
   return [h('dt', {}, name), h('dd', cls === undefined ? {} : { class: cls }, value)];
@@ -16,6 +17,7 @@ export function functionsLine(): HTMLElement {
   let text: string;
   if (st === undefined) text = 'Worksheet functions: not running in this page; they read the stored table when the workbook opens.';
   else if (st.state === 'loading') text = 'Worksheet functions: reading the workbook’s table…';
+  else if (st.state === 'unreadable' && (st.reason ?? '').startsWith('its pinned data set')) text = 'Worksheet functions: answer #N/A until the workbook’s pinned data (Data set tab) is repaired or removed.';
   else if (st.state === 'unreadable') text = 'Worksheet functions: answer #N/A for table look-ups until the table is repaired or reset.';
   else if (st.state === 'builtin') text = `Worksheet functions: use the built-in table ${st.version ?? ''}.`;
   else text = `Worksheet functions: use this workbook’s table (revision ${st.revision ?? '?'}).`;
@@ -52,7 +54,7 @@ export function renderInUse(): void {
         { class: 'actions' },
         h('button', { type: 'button', id: 'pin', class: 'primary', 'aria-describedby': 'pin-hint', onclick: () => void pinTable() }, 'Pin to this workbook…'),
       ),
-      h('p', { class: 'hint', id: 'pin-hint' }, 'Stores the built-in table in this workbook, so later add-in updates do not change its results. Editing a row does the same.'),
+      h('p', { class: 'hint', id: 'pin-hint' }, 'Stores the built-in table and the rest of the data set (atomic weights, species data, constants) in this workbook, so later add-in updates do not change its results. Editing a row pins the table only.'),
       functionsLine(),
     );
     return;
@@ -137,6 +139,7 @@ export async function reload(): Promise<void> {
   ui.busy = true;
   try {
     await model.load();
+    await dataModel.load();
     clearMessages();
     ui.ready = true;
     ui.loadError = null;
@@ -181,10 +184,5 @@ export async function updateToBuiltin(): Promise<void> {
 }
 
 export async function pinTable(): Promise<void> {
-  const signoff = await confirmSigned({
-    title: `Pin the built-in table ${builtin.version} to this workbook?`,
-    body: ['The workbook keeps its own copy of the table, so later add-in updates do not change its results. Its revision log starts with this entry.'],
-    ok: 'Pin',
-  });
-  if (signoff !== null) await act(() => model.pin(signoff));
+  await confirmAndPin();
 }

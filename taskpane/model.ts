@@ -138,7 +138,9 @@ export class TableModel {
       const same =
         (this.state.kind === 'none' && st.state === 'builtin') ||
         (this.state.kind === 'readable' && st.state === 'workbook' && st.checksum === this.state.read.checksum && st.revision === this.state.read.copy.revision) ||
-        (this.state.kind === 'unreadable' && st.state === 'unreadable');
+        (this.state.kind === 'unreadable' && st.state === 'unreadable') ||
+        // The table is fine but the pinned data is not: handing the table over again changes nothing.
+        (this.state.kind !== 'unreadable' && st.state === 'unreadable' && (st.reason ?? '').startsWith('its pinned data set'));
       if (same && !force) return undefined;
       computedWith = computedWithOf(host.useStoredValue(this.state.raw));
       // Still reading at start-up: the cells are waiting and will get this table; nothing to recalculate.

@@ -22,10 +22,11 @@ import { renderEph, wireEph } from './eph';
 import { renderConsistency, wireConsistency } from './consistency';
 import { builtinTable } from '../src/table/builtin';
 import { renderLog, wireLog } from './logView';
+import { renderDataSet } from './dataSet';
 import { buildTable } from '../src/table/table';
 import type { PotentialTable } from '../src/table/types';
 
-export const TABS = ['couples', 'electrodes', 'files', 'eph', 'log', 'about'] as const;
+export const TABS = ['couples', 'electrodes', 'files', 'eph', 'log', 'data', 'about'] as const;
 
 export function selectTab(name: (typeof TABS)[number], focus: boolean): void {
   for (const t of TABS) {
@@ -69,6 +70,7 @@ export function renderAll(): void {
   renderEph();
   renderConsistency();
   renderLog();
+  renderDataSet();
   const unreadable = model.state.kind === 'unreadable';
   for (const bid of ['export-download', 'export-show', 'copy-sheet', 'import-check']) byId<HTMLButtonElement>(bid).disabled = unreadable || !ui.ready;
   if (el !== null && !el.isConnected) {

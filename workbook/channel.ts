@@ -17,11 +17,17 @@ export interface FunctionsHostStatus {
   readonly electrodes?: number;
   /** Why the workbook's table could not be read (state "unreadable"). */
   readonly reason?: string;
+  /** The data set in use (all parts: the table and the reference data), when the table can be read. */
+  readonly dataset?: { readonly version: string; readonly checksum: string; readonly pinned: readonly string[] };
+  /** Checksum over the data parts besides the table in use, or "unreadable" (recorded as cellwright.computedWithData). */
+  readonly dataChecksum?: string;
 }
 
 export interface CellwrightFunctionsHost {
   readonly apiVersion: 1;
   useStoredValue(value: unknown): FunctionsHostStatus;
+  /** The functions use this pinned-data value from now on (null: the built-in data); absent in hosts older than pinned data. */
+  usePinnedValue?(value: unknown): FunctionsHostStatus;
   status(): FunctionsHostStatus;
 }
 

@@ -5,10 +5,10 @@
 import * as F from '../families/provenance';
 
 /**
- * A fact about the potential table in use, for a template's header: "origin" (built-in, workbook, pinned built-in, unreadable), "version", "checksum" (SHA-256), "revision", "changed" (an Excel date serial), "couples", "electrodes", or "addin" (the add-in's version). Recalculates when the table changes.
+ * A fact about the potential table and the data set in use, for a template's header: "origin" (built-in, workbook, pinned built-in, unreadable), "version", "checksum" (SHA-256), "revision", "changed" (an Excel date serial), "couples", "electrodes", "addin" (the add-in's version), "dataset" (the data version), "datasetchecksum", "pinned" (the parts pinned in the workbook), or "checksum:<part>" (e.g. "checksum:atomicweights"). Recalculates when the table or the pinned data changes.
  * @customfunction TABLEINFO
  * @helpurl https://localhost:3000/docs/functions.html#tableinfo
- * @param field One of "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin".
+ * @param field One of "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin", "dataset", "datasetchecksum", "pinned", or "checksum:<part>".
  * @returns The fact (text or number).
  */
 function tableinfo(field: any[][]): any[][] {

@@ -1,18 +1,25 @@
-/** Provenance: facts about the potential table in use and the add-in, for a template's header. */
+/** Provenance: facts about the potential table and the data set in use and the add-in, for a template's header. */
 import pkg from '../../package.json';
 import { NotFoundError } from '../../src/errors';
 import { recordsOf } from '../../src/store/rows';
 import { builtinChecksum } from '../../src/store/stored';
+import { DATA_PARTS } from '../../src/dataset/parts';
 import { builtinTable } from '../../src/table/builtin';
+import { dataSetInUse } from '../dataHost';
 import { worksheet } from '../adapter';
 import { tableInUse } from '../context';
-import { tableDetails } from '../workbookHost';
+import { tableDetails, tablePart } from '../workbookHost';
 
 /** The add-in's version, from package.json at build time. */
 export const ADDIN_VERSION: string = pkg.version;
 
 /** The fields TABLEINFO answers, in the order its messages list them. */
-export const TABLEINFO_FIELDS = ['origin', 'version', 'checksum', 'revision', 'changed', 'couples', 'electrodes', 'addin'] as const;
+export const TABLEINFO_FIELDS = ['origin', 'version', 'checksum', 'revision', 'changed', 'couples', 'electrodes', 'addin', 'dataset', 'datasetchecksum', 'pinned'] as const;
+
+/** The parts of the data set, for "checksum:<part>". */
+export const DATASET_PART_NAMES: readonly string[] = ['table', ...DATA_PARTS];
+
+const PART_FIELD = 'checksum:';
 
 /** Days from Excel's day 0 (1899-12-30, the 1900 date system) to 1970-01-01. */
 const EXCEL_EPOCH_DAYS = 25569;
@@ -35,14 +42,26 @@ let builtinSum: string | null = null;
  */
 export function tableInfo(field: string): string | number {
   const f = field.trim().toLowerCase();
-  if (!(TABLEINFO_FIELDS as readonly string[]).includes(f)) {
-    throw new NotFoundError(`unknown field "${field}"; the fields are ${TABLEINFO_FIELDS.map((x) => `"${x}"`).join(', ')}`);
+  const part = f.startsWith(PART_FIELD) ? f.slice(PART_FIELD.length).trim() : null;
+  if (part !== null && !DATASET_PART_NAMES.includes(part)) {
+    throw new NotFoundError(`unknown part "${part}" of the data set; the parts are ${DATASET_PART_NAMES.map((x) => `"${x}"`).join(', ')}`);
+  }
+  if (part === null && !(TABLEINFO_FIELDS as readonly string[]).includes(f)) {
+    throw new NotFoundError(`unknown field "${field}"; the fields are ${TABLEINFO_FIELDS.map((x) => `"${x}"`).join(', ')}, or "checksum:<part>" for one part of the data set`);
   }
   if (f === 'addin') return ADDIN_VERSION;
   const t = tableInUse();
   if (t.kind === 'unreadable') {
     if (f === 'origin') return 'unreadable';
     throw new NotFoundError(`the workbook's potential table could not be read: ${t.reason}`);
+  }
+  if (part !== null || f === 'dataset' || f === 'datasetchecksum' || f === 'pinned') {
+    const ds = dataSetInUse(tablePart());
+    if (part !== null) return ds.parts.find((p) => p.name === part)?.checksum ?? '';
+    if (f === 'dataset') return ds.version;
+    if (f === 'datasetchecksum') return ds.checksum;
+    const pinned = ds.parts.filter((p) => p.pinned).map((p) => p.name);
+    return pinned.length === 0 ? 'none' : pinned.join(', ');
   }
   const d = tableDetails();
   if (builtinSum === null) builtinSum = builtinChecksum(recordsOf(builtinTable()));
@@ -72,8 +91,8 @@ export function tableInfo(field: string): string | number {
 
 export const TABLEINFO = worksheet({
   id: 'TABLEINFO',
-  description: 'A fact about the potential table in use, for a template\'s header: "origin" (built-in, workbook, pinned built-in, unreadable), "version", "checksum" (SHA-256), "revision", "changed" (an Excel date serial), "couples", "electrodes", or "addin" (the add-in\'s version). Recalculates when the table changes.',
-  args: [{ name: 'field', kind: 'text', unit: '', help: 'One of "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin".' }],
+  description: 'A fact about the potential table and the data set in use, for a template\'s header: "origin" (built-in, workbook, pinned built-in, unreadable), "version", "checksum" (SHA-256), "revision", "changed" (an Excel date serial), "couples", "electrodes", "addin" (the add-in\'s version), "dataset" (the data version), "datasetchecksum", "pinned" (the parts pinned in the workbook), or "checksum:<part>" (e.g. "checksum:atomicweights"). Recalculates when the table or the pinned data changes.',
+  args: [{ name: 'field', kind: 'text', unit: '', help: 'One of "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin", "dataset", "datasetchecksum", "pinned", or "checksum:<part>".' }],
   result: 'The fact (text or number).',
   helpAnchor: 'tableinfo',
   compute: (field: string) => tableInfo(field),

@@ -15,7 +15,7 @@ import ExcelJS from 'exceljs';
 import FormulaParser from 'fast-formula-parser';
 import { ROOT } from './bundle.mjs';
 import { loadBundleWithTable } from './tablehost.mjs';
-import { TABLE_SETTING_KEY, manifestIdentity, readSetting } from './webextension.mjs';
+import { PINNED_DATA_KEY, TABLE_SETTING_KEY, manifestIdentity, readSetting } from './webextension.mjs';
 
 const { FormulaError } = FormulaParser;
 export const NAMESPACE = 'CELLWRIGHT';
@@ -213,23 +213,29 @@ async function tableFor(buffer, { tableCsv, tableCsvName }) {
     addinId = null;
   }
   let setting;
+  let pinned;
   try {
     setting = await readSetting(buffer, TABLE_SETTING_KEY, addinId);
     if (!setting.found && addinId) setting = await readSetting(buffer, TABLE_SETTING_KEY, null);
+    // The workbook's pinned data (atomic weights, species data, constants), when it carries any.
+    pinned = await readSetting(buffer, PINNED_DATA_KEY, addinId);
+    if (!pinned.found && addinId) pinned = await readSetting(buffer, PINNED_DATA_KEY, null);
   } catch (e) {
     throw new UnreadableError(`not an .xlsx file (${e.message})`);
   }
+  const pinnedValue = pinned.found ? pinned.value : null;
   if (!setting.found) {
-    const { bundle, status } = await loadBundleWithTable(null);
+    const { bundle, status } = await loadBundleWithTable(null, undefined, pinnedValue);
+    if (status.state === 'unreadable') throw new UnreadableError(`the workbook's pinned data (${pinned.part}) cannot be read: ${status.reason}`);
     return { bundle, table: { origin: 'built-in', ...tableFacts(status), note: "the workbook carries no potential table of its own: the add-in's built-in table was used" } };
   }
-  const { bundle, status } = await loadBundleWithTable(setting.value);
+  const { bundle, status } = await loadBundleWithTable(setting.value, undefined, pinnedValue);
   if (status.state === 'unreadable') throw new UnreadableError(`the workbook's stored potential table (${setting.part}) cannot be read: ${status.reason}`);
   return { bundle, table: { origin: 'workbook', part: setting.part, ...tableFacts(status), note: `the workbook's own table (${setting.part}, setting ${TABLE_SETTING_KEY})` } };
 }
 
 function tableFacts(status) {
-  return { version: status.version, revision: status.revision ?? null, checksum: status.checksum, couples: status.couples, electrodes: status.electrodes };
+  return { version: status.version, revision: status.revision ?? null, checksum: status.checksum, couples: status.couples, electrodes: status.electrodes, dataset: status.dataset ?? null };
 }
 
 /* ------------------------------------------------------------------------------------------ */
@@ -492,6 +498,7 @@ export function reportLines(report, file) {
   L.push(`cellwright check ${file}`);
   L.push(`Potential table: ${t.origin}${t.version ? `, version ${t.version}` : ''}${t.revision ? `, revision ${t.revision}` : ''}, checksum ${t.checksum}`);
   L.push(`  (${t.note})`);
+  if (t.dataset) L.push(`Data set: version ${t.dataset.version}, checksum ${t.dataset.checksum}; pinned in the workbook: ${t.dataset.pinned.length === 0 ? 'none' : t.dataset.pinned.join(', ')}`);
   const c = report.counts;
   L.push(`Formulas: ${c.formulas} on ${c.sheets} sheet(s), ${c.addinFormulas} calling ${NAMESPACE} functions.`);
   L.push(`Agreeing: ${c.agreeing}. Differing: ${c.differing}. Not evaluable: ${c.notEvaluable}. (numbers within a relative ${report.tolerance}; texts and error codes exactly)`);

@@ -11,14 +11,16 @@ async function store() {
   if (mods) return mods;
   register('./ts-hooks.mjs', import.meta.url);
   const load = (p) => import(pathToFileURL(resolve(ROOT, p)).href);
-  const [copy, stored, rows, builtin, csv] = await Promise.all([
+  const [copy, stored, rows, builtin, csv, pinnedData, parts] = await Promise.all([
     load('src/store/copy.ts'),
     load('src/store/stored.ts'),
     load('src/store/rows.ts'),
     load('src/table/builtin.ts'),
     load('src/store/csv.ts'),
+    load('src/dataset/pinned.ts'),
+    load('src/dataset/parts.ts'),
   ]);
-  mods = { copy, stored, rows, builtin, csv, records: rows.recordsOf(builtin.builtinTable()) };
+  mods = { copy, stored, rows, builtin, csv, pinnedData, parts, records: rows.recordsOf(builtin.builtinTable()) };
   return mods;
 }
 
@@ -26,6 +28,12 @@ async function store() {
 export async function pinnedStoredText(changedAt = new Date().toISOString()) {
   const m = await store();
   return m.stored.writeStoredText({ ...m.copy.pinnedCopy(m.records), revision: 1, changedAt });
+}
+
+/** The stored text of the add-in's built-in reference data pinned to a workbook (every part besides the table; what the pane's Pin writes). */
+export async function pinnedDataText(pinnedAt = new Date().toISOString()) {
+  const m = await store();
+  return m.pinnedData.writePinnedText({ version: m.parts.DATASET_VERSION, pinnedAt });
 }
 
 /** The stored text after one table change (see TableChange in src/store/copy.ts) applied to `text`. */

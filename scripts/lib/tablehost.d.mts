@@ -7,5 +7,7 @@ export interface TableStatus {
   couples?: number;
   electrodes?: number;
   reason?: string;
+  dataset?: { version: string; checksum: string; pinned: string[] };
+  dataChecksum?: string;
 }
-export function loadBundleWithTable(stored: unknown, distDir?: string): Promise<{ bundle: LoadedBundle; status: TableStatus }>;
+export function loadBundleWithTable(stored: unknown, distDir?: string, pinned?: unknown): Promise<{ bundle: LoadedBundle; status: TableStatus }>;

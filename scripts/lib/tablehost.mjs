@@ -1,12 +1,14 @@
 // The production bundle with a workbook's stored potential table in use, read by the runtime's own
 // start-up path (functions/runtime.ts → readStoredText, checksum included): the bundle is evaluated
 // with a minimal Office/Excel pair whose workbook settings hold exactly the stored value, so the
-// functions read, check and use it as they do in Excel. Used by `cellwright check` and the demo.
+// functions read, check and use it as they do in Excel; the same for the pinned data (the data set's
+// other parts) when given. Used by `cellwright check` and the demo.
 import { loadBundle } from './bundle.mjs';
-import { TABLE_SETTING_KEY } from './webextension.mjs';
+import { PINNED_DATA_KEY, TABLE_SETTING_KEY } from './webextension.mjs';
 
-/** An Office + Excel pair that answers the settings read of workbook/store.ts with `stored`. */
-function hostFor(stored) {
+/** An Office + Excel pair that answers the settings reads of workbook/store.ts and workbook/pinnedData.ts with `stored` and `pinned`. */
+function hostFor(stored, pinned) {
+  const values = { [TABLE_SETTING_KEY]: stored, [PINNED_DATA_KEY]: pinned };
   const Office = {
     onReady: async () => ({ host: 'Excel', platform: 'PC' }),
     HostType: { Excel: 'Excel' },
@@ -16,8 +18,9 @@ function hostFor(stored) {
     workbook: {
       settings: {
         getItemOrNullObject(key) {
-          const has = key === TABLE_SETTING_KEY && stored !== null && stored !== undefined;
-          return { load() {}, isNullObject: !has, value: has ? stored : null, delete() {} };
+          const v = values[key];
+          const has = v !== null && v !== undefined;
+          return { load() {}, isNullObject: !has, value: has ? v : null, delete() {} };
         },
         // the start-up recalculation records the table it computed with (cellwright.computedWith)
         add() {},
@@ -36,8 +39,8 @@ function hostFor(stored) {
  * functions have read it. Returns the loaded bundle and the functions' status:
  * { state: 'builtin' | 'workbook' | 'unreadable', version, revision, checksum, couples, electrodes, reason }.
  */
-export async function loadBundleWithTable(stored, distDir) {
-  const { Office, Excel } = hostFor(stored);
+export async function loadBundleWithTable(stored, distDir, pinned = null) {
+  const { Office, Excel } = hostFor(stored, pinned);
   const bundle = loadBundle({ Office, Excel, setTimeout, clearTimeout, console }, distDir);
   const host = bundle.sandbox.cellwrightFunctionsHost;
   if (!host) throw new Error('the functions bundle did not install its host channel');

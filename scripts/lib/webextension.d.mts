@@ -1,6 +1,7 @@
 export const NS_WE: string;
 export const NS_WETP: string;
 export const TABLE_SETTING_KEY: string;
+export const PINNED_DATA_KEY: string;
 export interface WebExtensionPart {
   part: string;
   addinId: string;

@@ -24,6 +24,8 @@ const CT_TASKPANES = 'application/vnd.ms-office.webextensiontaskpanes+xml';
 
 /** The add-in's settings key of the stored potential table (workbook/store.ts). */
 export const TABLE_SETTING_KEY = 'cellwright.potentialTable';
+/** The add-in's settings key of the pinned data, the data set's parts besides the table (workbook/pinnedData.ts). */
+export const PINNED_DATA_KEY = 'cellwright.pinnedData';
 
 const esc = (s) => String(s).replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 const unesc = (s) =>

@@ -1,4 +1,4 @@
-import data from '../../data/galvanic-series.json';
+import { dataPart } from '../dataset/active';
 import { NotFoundError } from '../errors';
 
 const norm = (s: string): string => s.toLowerCase().replace(/[\s,()&\-/]+/g, '');
@@ -24,7 +24,7 @@ export interface SeriesRow {
  */
 export function galvanicSeries(alloy: string): SeriesRow {
   const k = norm(alloy);
-  const rows = data.series as readonly SeriesRow[];
+  const rows = dataPart('galvanicseries').series as readonly SeriesRow[];
   const exact = rows.find((r) => norm(r.alloy) === k);
   if (exact) return exact;
   const part = rows.filter((r) => norm(r.alloy).includes(k));

@@ -1,4 +1,4 @@
-import data from '../../data/anodes.json';
+import { dataPart } from '../dataset/active';
 import { InputError, NotFoundError } from '../errors';
 
 const norm = (s: string): string => s.toLowerCase().replace(/\s+/g, '');
@@ -14,6 +14,7 @@ const norm = (s: string): string => s.toLowerCase().replace(/\s+/g, '');
  * See also: anodeMass, anodeOutput
  */
 export function anodeData(anode: string, property: string): number | string {
+  const data = dataPart('anodes');
   const k = norm(anode);
   const row = data.anodes.find((r) => norm(r.key) === k || r.aliases.some((a) => norm(a) === k));
   if (!row) {

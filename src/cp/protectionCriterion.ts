@@ -1,4 +1,4 @@
-import data from '../../data/cp-criteria.json';
+import { dataPart } from '../dataset/active';
 import { InputError, NotFoundError } from '../errors';
 
 /** One criterion as a standard states it. */
@@ -52,6 +52,7 @@ export function protectionCriterion(electrodeKey: string, condition: string): Cr
   if (c === undefined) {
     throw new InputError(`unknown condition "${condition}"; use "standard", "polarisation", "limit", "anaerobic", "hightemperature" or "highstrength"`);
   }
+  const data = dataPart('cpcriteria');
   const missing = data.notRead.find((r) => r.condition === c);
   if (missing) throw new NotFoundError(missing.message);
   const wanted = c === 'polarisation' ? null : electrodeKey;

@@ -1,4 +1,4 @@
-import data from '../../data/electrolysis.json';
+import { dataPart } from '../dataset/active';
 import { FARADAY_C_PER_MOL } from '../constants';
 import { NotFoundError } from '../errors';
 
@@ -20,7 +20,7 @@ const N_H2 = 2;
  */
 export function heatingValueVoltage(basis: string): number {
   const b = basis.trim().toUpperCase();
-  const hv = data.heatingValues;
+  const hv = dataPart('electrolysis').heatingValues;
   const dfH = b === 'HHV' ? hv.dfH_H2O_liquid_kJ_mol : b === 'LHV' ? hv.dfH_H2O_gas_kJ_mol : null;
   if (dfH === null) throw new NotFoundError(`unknown basis "${basis}"; use "HHV", "LHV" or a reference voltage in V`);
   return (-dfH * J_PER_KJ) / (N_H2 * FARADAY_C_PER_MOL);

@@ -1,13 +1,7 @@
-import data from '../../data/electrolysis.json';
+import { dataPart } from '../dataset/active';
 import { kelvin } from '../constants';
 import { InputError } from '../errors';
 
-const KOH = data.conductivity.KOH;
-const { A, B, C, D, E, F } = KOH.coefficients;
-const [M_MIN, M_MAX] = KOH.concentration_mol_L;
-const [T_MIN, T_MAX] = KOH.temperature_C;
-/** Above this no solution is that concentrated (saturation at 25 °C): a number beyond it is a mass percentage. */
-const M_SATURATED = KOH.saturation_mol_L;
 /** S/m per S/cm. */
 const S_M_PER_S_CM = 100;
 
@@ -25,6 +19,12 @@ const S_M_PER_S_CM = 100;
  * @param temperatureC temperature, °C
  */
 export function kohConductivity(molarity: number, temperatureC: number): number {
+  const KOH = dataPart('electrolysis').conductivity.KOH;
+  const { A, B, C, D, E, F } = KOH.coefficients;
+  const [M_MIN, M_MAX] = KOH.concentration_mol_L;
+  const [T_MIN, T_MAX] = KOH.temperature_C;
+  /** Above this no solution is that concentrated (saturation at 25 °C): a number beyond it is a mass percentage. */
+  const M_SATURATED = KOH.saturation_mol_L;
   if (!(molarity >= M_MIN && molarity <= M_MAX)) {
     const percent = molarity > M_SATURATED && molarity <= 100 ? '; a mass percentage? the concentration is in mol per litre of solution' : '';
     throw new InputError(`KOH concentration ${molarity} mol/L is outside the correlation's range ${M_MIN}–${M_MAX} mol/L (Gilliam et al. 2007)${percent}`);

@@ -1,4 +1,4 @@
-import data from '../../data/electrolysis.json';
+import { dataPart } from '../dataset/active';
 import { GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
 import { NotFoundError } from '../errors';
 
@@ -6,7 +6,7 @@ import { NotFoundError } from '../errors';
 const PA_PER_KPA = 1000;
 
 type RefKey = '0C' | '15C' | '20C';
-const REFS = data.referenceConditions as unknown as Record<RefKey, { temperature_C: number; pressure_kPa: number; name: string }>;
+const refs = (): Record<RefKey, { temperature_C: number; pressure_kPa: number; name: string }> => dataPart('electrolysis').referenceConditions;
 const KEYS: RefKey[] = ['0C', '15C', '20C'];
 
 /**
@@ -25,6 +25,6 @@ export function referenceMolarVolume(reference: string): number {
   if (!KEYS.includes(key as RefKey)) {
     throw new NotFoundError(`unknown reference condition "${reference}"; use "0C" (0 °C, 101.325 kPa), "15C" or "20C" (both at 101.325 kPa)`);
   }
-  const r = REFS[key as RefKey];
+  const r = refs()[key as RefKey];
   return (GAS_CONSTANT_J_PER_MOL_K * kelvin(r.temperature_C)) / (r.pressure_kPa * PA_PER_KPA);
 }

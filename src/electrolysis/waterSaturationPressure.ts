@@ -1,9 +1,7 @@
-import data from '../../data/electrolysis.json';
+import { dataPart } from '../dataset/active';
 import { kelvin } from '../constants';
 import { InputError } from '../errors';
 
-const N = data.waterSaturation.n;
-const [T_MIN, T_MAX] = data.waterSaturation.temperature_K;
 /** bar per MPa. */
 const BAR_PER_MPA = 10;
 
@@ -18,6 +16,9 @@ const BAR_PER_MPA = 10;
  * @param temperatureC temperature, °C
  */
 export function waterSaturationPressure(temperatureC: number): number {
+  const ws = dataPart('electrolysis').waterSaturation;
+  const N = ws.n;
+  const [T_MIN, T_MAX] = ws.temperature_K;
   const T = kelvin(temperatureC);
   if (!(T >= T_MIN - 1e-9 && T <= T_MAX)) {
     throw new InputError(`temperature ${temperatureC} °C is outside the range of the water saturation equation, 0 to 373.946 °C`);

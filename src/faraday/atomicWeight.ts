@@ -1,11 +1,12 @@
 /**
  * IUPAC standard atomic weights (abridged values) from data/atomic-weights.json.
  */
-import data from '../../data/atomic-weights.json';
+import { cachedOf } from '../dataset/active';
 import { isElementSymbol } from '../chem/elements';
 import { NotFoundError } from '../errors';
 
-const WEIGHTS: ReadonlyMap<string, number> = new Map(data.elements.map((e) => [e.symbol, e.atomicWeight]));
+/** The weights of the atomic-weights part in use (built-in or pinned), indexed once per part. */
+const weights = cachedOf('atomicweights', (part): ReadonlyMap<string, number> => new Map(part.elements.map((e) => [e.symbol, e.atomicWeight])));
 
 /**
  * Standard atomic weight of an element (IUPAC CIAAW 2021, abridged), g/mol. Throws NotFoundError
@@ -17,7 +18,7 @@ const WEIGHTS: ReadonlyMap<string, number> = new Map(data.elements.map((e) => [e
  * See also: molarMass
  */
 export function atomicWeight(symbol: string): number {
-  const w = WEIGHTS.get(symbol);
+  const w = weights().get(symbol);
   if (w !== undefined) return w;
   if (isElementSymbol(symbol)) {
     throw new NotFoundError(`${symbol} has no IUPAC standard atomic weight (no stable isotopic composition); give the molar mass in g/mol instead`);

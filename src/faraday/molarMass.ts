@@ -1,4 +1,5 @@
 import Decimal from 'decimal.js';
+import { cachedOf } from '../dataset/active';
 import { parseSpecies } from '../chem/formula';
 import { InputError, NotFoundError, finite } from '../errors';
 import { atomicWeight } from './atomicWeight';
@@ -24,6 +25,7 @@ import { atomicWeight } from './atomicWeight';
  */
 export function molarMass(formula: string): number {
   // A range of DEPOSITMASS calls names the same few formulas over and over: parse each once.
+  const MOLAR_MASSES = molarMasses();
   const known = MOLAR_MASSES.get(formula);
   if (known !== undefined) return known;
   const m = computeMolarMass(formula);
@@ -32,8 +34,8 @@ export function molarMass(formula: string): number {
   return m;
 }
 
-/** Molar masses already computed, by formula text as given (only successes are kept). */
-const MOLAR_MASSES = new Map<string, number>();
+/** Molar masses already computed with the atomic weights in use, by formula text as given (only successes are kept). */
+const molarMasses = cachedOf('atomicweights', () => new Map<string, number>());
 
 /** Applies the space rule: spaces before a multiplied formula become hydrate dots; other inner spaces are an error. */
 function hydrateSpaces(formula: string): string {

@@ -2,6 +2,7 @@ import { asciiFormula } from '../chem/asciiFormula';
 import { isElementSymbol } from '../chem/elements';
 import { InputError } from '../errors';
 import { molarMass } from './molarMass';
+import { cachedOf } from '../dataset/active';
 
 /**
  * Molar mass in g/mol of a species argument of the deposition functions: a formula text (see
@@ -21,8 +22,10 @@ export function speciesMolarMass(species: string | number): number {
     if (!(species > 0) || !Number.isFinite(species)) throw new InputError(`a molar mass must be a finite number > 0 g/mol; got ${species}`);
     return species;
   }
-  // A range of DEPOSITMASS calls names the same few species over and over: check each text once.
-  const known = SPECIES_MASSES.get(species);
+  // A range of DEPOSITMASS calls names the same few species over and over: check each text once
+  // (per set of atomic weights in use: a workbook's pinned weights start a fresh memo).
+  const masses = speciesMasses();
+  const known = masses.get(species);
   if (known !== undefined) return known;
   const meant = miscapitalisedElement(species);
   if (meant !== undefined) {
@@ -41,13 +44,13 @@ export function speciesMolarMass(species: string | number): number {
     }
     throw e;
   }
-  if (SPECIES_MASSES.size >= 1000) SPECIES_MASSES.clear();
-  SPECIES_MASSES.set(species, m);
+  if (masses.size >= 1000) masses.clear();
+  masses.set(species, m);
   return m;
 }
 
 /** Molar masses of species texts already accepted, by text as given (refused texts are not kept). */
-const SPECIES_MASSES = new Map<string, number>();
+const speciesMasses = cachedOf('atomicweights', () => new Map<string, number>());
 
 /**
  * When a species text is two capital letters (a charge or phase mark may follow) that are two

@@ -4,17 +4,16 @@
  * (Bandura & Lvov, J. Phys. Chem. Ref. Data 35 (2006) 15, with the saturated-liquid density of
  * Wagner & Pruß, J. Phys. Chem. Ref. Data 22 (1993) 783).
  */
-import water from '../../data/water.json';
+import { dataPart } from '../dataset/active';
 import { kelvin } from '../constants';
 import { InputError } from '../errors';
 
-const kw = water.ionProduct;
-const rho = water.saturatedLiquidDensity;
 
 /** Lowest and highest temperature accepted, °C (the triple point to just below the critical point). */
 export const WATER_PKW_RANGE_C = { min: 0, max: 350 } as const;
 
 function saturatedDensity_g_cm3(T: number): number {
+  const rho = dataPart('water').saturatedLiquidDensity;
   const tau = 1 - T / rho.Tc_K;
   let s = 1;
   for (let i = 0; i < rho.b.length; i++) s += rho.b[i] * Math.pow(tau, rho.exponents[i]);
@@ -34,6 +33,7 @@ export function waterPKw(temperatureC: number): number {
   if (!(temperatureC >= WATER_PKW_RANGE_C.min && temperatureC <= WATER_PKW_RANGE_C.max)) {
     throw new InputError(`temperature ${temperatureC} °C is outside the data's range: the ion product of water is available from ${WATER_PKW_RANGE_C.min} to ${WATER_PKW_RANGE_C.max} °C`);
   }
+  const kw = dataPart('water').ionProduct;
   const T = kelvin(temperatureC);
   const d = saturatedDensity_g_cm3(T);
   const [a0, a1, a2] = kw.alpha;

@@ -1,27 +1,31 @@
 /**
  * Debye–Hückel A and B of water from its dielectric constant and density (data/debye-huckel.json).
  */
-import data from '../../data/debye-huckel.json';
+import { dataPart } from '../dataset/active';
+import type { DataParts } from '../dataset/parts';
+import { BUILTIN_PARTS } from '../dataset/parts';
 import { AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, ELEMENTARY_CHARGE_C, LN10, kelvin } from '../constants';
 import { InputError } from '../errors';
 
-/** Temperatures at which A and B are available, °C (where the dielectric constant was measured). */
+type Data = DataParts['debyehuckel'];
+
+/** Temperatures at which A and B are available with the built-in data, °C (where the dielectric constant was measured). */
 export const DEBYE_HUCKEL_RANGE_C: { readonly min: number; readonly max: number } = {
-  min: data.temperatureRange_C.min,
-  max: data.temperatureRange_C.max,
+  min: BUILTIN_PARTS.debyehuckel.temperatureRange_C.min,
+  max: BUILTIN_PARTS.debyehuckel.temperatureRange_C.max,
 };
 
 /** m per Å. */
 const M_PER_ANGSTROM = 1e-10;
 
 /** Relative permittivity of water at t °C (Malmberg & Maryott 1956). */
-function dielectricConstant(t: number): number {
+function dielectricConstant(data: Data, t: number): number {
   const c = data.dielectricConstant.coefficients;
   return c[0] + t * (c[1] + t * (c[2] + t * c[3]));
 }
 
 /** Density of water at t °C and 101.325 kPa, kg/m³ (Kell 1975). */
-function waterDensity(t: number): number {
+function waterDensity(data: Data, t: number): number {
   const n = data.density.numerator;
   let num = 0;
   for (let i = n.length - 1; i >= 0; i--) num = num * t + n[i];
@@ -51,22 +55,26 @@ export interface DebyeHuckelParameters {
  */
 export function debyeHuckelParameters(temperatureC: number): DebyeHuckelParameters {
   // A range of ACTIVITYCOEF calls is usually at one temperature: keep the last answer.
-  if (temperatureC === lastTemperatureC && lastParameters !== null) return lastParameters;
-  const p = computeParameters(temperatureC);
+  const data = dataPart('debyehuckel');
+  if (temperatureC === lastTemperatureC && lastParameters !== null && lastData === data) return lastParameters;
+  const p = computeParameters(data, temperatureC);
   lastTemperatureC = temperatureC;
   lastParameters = p;
+  lastData = data;
   return p;
 }
 
 let lastTemperatureC = Number.NaN;
 let lastParameters: DebyeHuckelParameters | null = null;
+let lastData: Data | null = null;
 
-function computeParameters(temperatureC: number): DebyeHuckelParameters {
-  if (!(temperatureC >= DEBYE_HUCKEL_RANGE_C.min && temperatureC <= DEBYE_HUCKEL_RANGE_C.max)) {
-    throw new InputError(`temperature ${temperatureC} °C is outside the data's range: Debye–Hückel parameters are available from ${DEBYE_HUCKEL_RANGE_C.min} to ${DEBYE_HUCKEL_RANGE_C.max} °C`);
+function computeParameters(data: Data, temperatureC: number): DebyeHuckelParameters {
+  const range = data.temperatureRange_C;
+  if (!(temperatureC >= range.min && temperatureC <= range.max)) {
+    throw new InputError(`temperature ${temperatureC} °C is outside the data's range: Debye–Hückel parameters are available from ${range.min} to ${range.max} °C`);
   }
-  const epsR = dielectricConstant(temperatureC);
-  const rho = waterDensity(temperatureC);
+  const epsR = dielectricConstant(data, temperatureC);
+  const rho = waterDensity(data, temperatureC);
   const eps0 = data.vacuumPermittivity_F_m.value;
   const bjerrum = (ELEMENTARY_CHARGE_C * ELEMENTARY_CHARGE_C) / (4 * Math.PI * eps0 * epsR * BOLTZMANN_J_PER_K * kelvin(temperatureC));
   const B = Math.sqrt(8 * Math.PI * AVOGADRO_PER_MOL * rho * bjerrum) * M_PER_ANGSTROM;

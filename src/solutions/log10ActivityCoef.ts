@@ -1,4 +1,4 @@
-import data from '../../data/debye-huckel.json';
+import { dataPart } from '../dataset/active';
 import { InputError } from '../errors';
 import type { ActivityModel } from './activityModel';
 import { debyeHuckelParameters } from './debyeHuckelParameters';
@@ -20,6 +20,7 @@ import { debyeHuckelParameters } from './debyeHuckelParameters';
  * See also: activityCoef, meanActivityCoef
  */
 export function log10ActivityCoef(zz: number, ionicStrength: number, model: ActivityModel, temperatureC: number, ionSizeA: number | null): number {
+  const data = dataPart('debyehuckel');
   const max = data.validity[model].maxIonicStrength_mol_kg;
   if (ionicStrength > max) {
     const name = model === 'DHLL' ? 'the limiting law (DHLL)' : model === 'EDH' ? 'the extended Debye–Hückel model (EDH)' : 'the Davies model';

@@ -1,5 +1,6 @@
 import { type HalfReaction, displaySpecies } from '../chem/halfReaction';
 import { parseSpecies } from '../chem/formula';
+import { cachedOf } from '../dataset/active';
 import { NotFoundError } from '../errors';
 import { speciesRecord } from './speciesRecord';
 import type { ReactionProperties } from './types';
@@ -7,8 +8,8 @@ import type { ReactionProperties } from './types';
 const T0 = 298.15;
 const HYDROGEN = { species: parseSpecies('H2'), phase: 'g' as const };
 
-/** Reaction properties by half-reaction object, computed once. */
-const memo = new WeakMap<HalfReaction, ReactionProperties | NotFoundError>();
+/** Reaction properties by half-reaction object, computed once per species data in use. */
+const memos = cachedOf('species', () => new WeakMap<HalfReaction, ReactionProperties | NotFoundError>());
 
 /**
  * Standard reaction properties at 298.15 K of a half-reaction written as a reduction, completed
@@ -24,6 +25,7 @@ const memo = new WeakMap<HalfReaction, ReactionProperties | NotFoundError>();
  * @throws NotFoundError naming each species that data/species.json lacks
  */
 export function halfReactionProperties(hr: HalfReaction): ReactionProperties {
+  const memo = memos();
   let r = memo.get(hr);
   if (r === undefined) {
     r = compute(hr);

@@ -1,21 +1,19 @@
-import speciesFile from '../../data/species.json';
 import { parseSpecies } from '../chem/formula';
 import { type HalfReactionTerm, speciesState } from '../chem/halfReaction';
 import type { SpeciesPhaseCode, SpeciesRecord } from './types';
-
-const rows = (speciesFile as unknown as { species: SpeciesRecord[] }).species;
-
-let index: Map<string, SpeciesRecord> | null = null;
+import { cachedOf } from '../dataset/active';
 
 function keyOf(speciesKey: string, state: SpeciesPhaseCode): string {
   return `${speciesKey}|${state}`;
 }
 
-function build(): Map<string, SpeciesRecord> {
+/** The rows of the species part in use (built-in or pinned), indexed once per part. */
+const index = cachedOf('species', (part): Map<string, SpeciesRecord> => {
+  const rows = (part as unknown as { species: SpeciesRecord[] }).species;
   const map = new Map<string, SpeciesRecord>();
   for (const r of rows) map.set(keyOf(parseSpecies(r.formula).key, r.state), r);
   return map;
-}
+});
 
 /** The phase a half-reaction term stands in, as species.json writes it. */
 function termPhase(term: Pick<HalfReactionTerm, 'species' | 'phase'>): SpeciesPhaseCode {
@@ -45,6 +43,5 @@ function termPhase(term: Pick<HalfReactionTerm, 'species' | 'phase'>): SpeciesPh
  * @returns the row, or undefined when data/species.json has none
  */
 export function speciesRecord(term: Pick<HalfReactionTerm, 'species' | 'phase'>): SpeciesRecord | undefined {
-  if (index === null) index = build();
-  return index.get(keyOf(term.species.key, termPhase(term)));
+  return index().get(keyOf(term.species.key, termPhase(term)));
 }

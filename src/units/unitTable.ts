@@ -2,7 +2,7 @@
  * The unit table of CONVERTUNIT (data/units.json): each unit's kind and its size in the SI unit of
  * that kind, with the spellings accepted for it.
  */
-import data from '../../data/units.json';
+import { dataPart } from '../dataset/active';
 import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, ZERO_CELSIUS_K } from '../constants';
 import { molarMass } from '../faraday/molarMass';
 
@@ -56,7 +56,8 @@ function sizeOf(raw: RawRow, byUnit: Map<string, RawRow>): number {
   throw new Error(`units.json: ${raw.unit} has no size`);
 }
 
-let table: { rows: UnitRow[]; index: Map<string, UnitRow> } | undefined;
+/** Built from the units and atomic-weights parts in use (some sizes are molar masses), rebuilt when either changes. */
+let table: { rows: UnitRow[]; index: Map<string, UnitRow>; units: unknown; weights: unknown } | undefined;
 
 /**
  * The unit table, built once: rows in file order and an index by every accepted spelling.
@@ -66,7 +67,9 @@ let table: { rows: UnitRow[]; index: Map<string, UnitRow> } | undefined;
  * See also: convertUnit
  */
 export function unitTable(): { rows: UnitRow[]; index: Map<string, UnitRow> } {
-  if (table) return table;
+  const data = dataPart('units');
+  const weights = dataPart('atomicweights');
+  if (table && table.units === data && table.weights === weights) return table;
   const raws = (data as { units: RawRow[] }).units;
   const byUnit = new Map(raws.map((r) => [r.unit, r]));
   const rows: UnitRow[] = [];
@@ -81,6 +84,6 @@ export function unitTable(): { rows: UnitRow[]; index: Map<string, UnitRow> } {
       index.set(k, row);
     }
   }
-  table = { rows, index };
+  table = { rows, index, units: data, weights };
   return table;
 }

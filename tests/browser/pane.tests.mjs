@@ -20,6 +20,9 @@ const couplesFile = JSON.parse(readFileSync(resolve(root, 'data/couples.json'), 
 const BUILTIN_VERSION = couplesFile.version;
 const builtinE0 = (key) => couplesFile.couples.find((c) => c.key === key).e0;
 const KEY = 'cellwright.potentialTable';
+const DATA_KEY = 'cellwright.pinnedData';
+const atomicWeightsFile = JSON.parse(readFileSync(resolve(root, 'data/atomic-weights.json'), 'utf8'));
+const NI = atomicWeightsFile.elements.find((e) => e.symbol === 'Ni').atomicWeight;
 const COMPUTED_WITH_KEY = 'cellwright.computedWith';
 
 /* ------------------------------------------------------------------------------------------------ */
@@ -140,6 +143,23 @@ function reseal(doc) {
   };
   return JSON.stringify({ ...doc, checksum: `sha256:${createHash('sha256').update(canonical(content), 'utf8').digest('hex')}` });
 }
+
+const sha = (content) => `sha256:${createHash('sha256').update(canonical(content), 'utf8').digest('hex')}`;
+
+/** The pinned-data text with every part's checksum and the overall one recomputed (as another add-in version would write it). */
+function resealData(doc) {
+  const sums = {};
+  for (const [name, part] of Object.entries(doc.parts)) {
+    part.checksum = sha(part.content);
+    sums[name] = part.checksum;
+  }
+  return JSON.stringify({ ...doc, checksum: sha(sums) });
+}
+
+/** =CELLWRIGHT.PLATETIME(25, 4, "Ni", 2, 8.908): minutes to plate 25 µm of nickel at 4 A/dm². */
+const plateNi = (page) => page.evaluate(() => window.__stubWorkbook.call('PLATETIME', [[25]], [[4]], [['Ni']], [[2]], [[8.908]], null));
+/** Faraday's law t = d·ρ·n·F/(M·j) in min (common practice), F = N_A·e (CODATA 2018, exact). */
+const plateMinutes = (M) => (25e-4 * 8.908 * 2 * 6.02214076e23 * 1.602176634e-19) / (M * 0.04) / 60;
 
 /* ------------------------------------------------------------------------------------------------ */
 /* Tests                                                                                            */
@@ -999,6 +1019,99 @@ export const tests = [
       await reopen(page);
       await page.click('#tab-log');
       assert.equal(await page.locator('#log-list > li').count(), 2);
+    },
+  },
+  {
+    name: 'data-set view: built-in parts, then the whole data set pinned; reopened it stays pinned',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#tab-data');
+      assert.match(await text(page, '#data-set-body'), new RegExp(`Data set ${BUILTIN_VERSION} \\(built-in: follows the add-in\\)`));
+      assert.equal(await page.locator('#data-parts > li').count(), 10);
+      assert.equal(await page.locator('#data-parts .tag.pinned').count(), 0);
+      const status = await page.evaluate(() => globalThis.cellwrightFunctionsHost.status());
+      assert.equal(await page.getAttribute('#data-set-checksum', 'title'), status.dataset.checksum); // full checksum on hover
+      assert.match(await text(page, '#data-set-checksum'), /^sha256:[0-9a-f]{12}…$/);
+      assert.match(await text(page, '#data-parts li[data-part="atomicweights"]'), /Atomic weights built-in Version .* 84 rows .*Read-only\. Source: IUPAC/);
+      await fitsWidth(page);
+      await labelled(page);
+      await shot(page, '29-data-set-built-in', '#tab-data');
+      await page.click('#pin-data-set');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.match(await notice(page), /Pinned: the built-in table .* reference data .* is now stored in this workbook/);
+      const pinned = JSON.parse(await page.evaluate((k) => window.__stubWorkbook.file().settings[k], DATA_KEY));
+      assert.equal(pinned.format, 'cellwright.pinned-data');
+      assert.deepEqual(Object.keys(pinned.parts), ['atomicweights', 'species', 'debyehuckel', 'water', 'electrolysis', 'units', 'anodes', 'cpcriteria', 'galvanicseries']);
+      assert.deepEqual(pinned.parts.atomicweights.content, atomicWeightsFile);
+      assert.notEqual(await stored(page), null);
+      assert.match(await text(page, '#data-set-body'), /\(pinned in this workbook\)/);
+      assert.equal(await page.locator('#data-parts .tag.pinned').count(), 10);
+      // A pinned copy of the built-in data has the built-in data set's checksum.
+      assert.equal(await page.getAttribute('#data-set-checksum', 'title'), status.dataset.checksum);
+      assert.ok(Math.abs((await plateNi(page)) - plateMinutes(NI)) < 1e-9);
+      await shot(page, '30-data-set-pinned', '#tab-data');
+      await reopen(page);
+      await page.click('#tab-data');
+      assert.equal(await page.locator('#data-parts .tag.pinned').count(), 10);
+      assert.deepEqual((await page.evaluate(() => globalThis.cellwrightFunctionsHost.status())).dataset.pinned.length, 10);
+    },
+  },
+
+  {
+    name: 'pinned data and a newer built-in data set that changes an atomic weight: the change is shown, results stay until updated',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#pin');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      // The workbook was pinned with an older data set in which nickel weighed 58.6934 g/mol (an earlier IUPAC value, from memory).
+      const doc = JSON.parse(await page.evaluate((k) => window.__stubWorkbook.file().settings[k], DATA_KEY));
+      doc.version = '2025.1';
+      doc.parts.atomicweights.content.version = '2025.1';
+      doc.parts.atomicweights.content.elements.find((e) => e.symbol === 'Ni').atomicWeight = 58.6934;
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [DATA_KEY, resealData(doc)]);
+      await reopen(page);
+      assert.ok(Math.abs((await plateNi(page)) - plateMinutes(58.6934)) < 1e-9); // the pinned weight, not the add-in's
+      await page.click('#tab-data');
+      const newer = await text(page, '#newer-data');
+      assert.match(newer, new RegExp(`built-in data ${BUILTIN_VERSION} is newer than 2025\\.1`));
+      assert.match(newer, /Updating would change 1 part: Atomic weights Ni: atomicWeight: 58\.6934 → 58\.693 version: 2025\.1 → 2026\.1 Until/);
+      assert.match(await text(page, '#data-parts li[data-part="atomicweights"]'), /pinned Version 2025\.1/);
+      await fitsWidth(page);
+      await shot(page, '31-newer-built-in-data-atomic-weight', '#tab-data');
+      await page.click('#update-data');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.match(await notice(page), new RegExp(`Updated: the workbook’s pinned reference data is now the add-in’s ${BUILTIN_VERSION}`));
+      assert.ok(Math.abs((await plateNi(page)) - plateMinutes(NI)) < 1e-9);
+      assert.equal(await page.locator('#newer-data').count(), 0);
+    },
+  },
+
+  {
+    name: 'damaged pinned data: the data set is unreadable, functions answer #N/A with the reason, nothing is overwritten',
+    async run({ open, shot }) {
+      const page = await openPane(open);
+      await page.click('#pin');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      const damaged = (await page.evaluate((k) => window.__stubWorkbook.file().settings[k], DATA_KEY)).replace(`"atomicWeight":${NI}`, '"atomicWeight":58.7');
+      await page.evaluate(([k, v]) => window.__stubWorkbook.setSetting(k, v), [DATA_KEY, damaged]);
+      await reopen(page);
+      const r = await plateNi(page);
+      assert.equal(r.error, '#N/A');
+      assert.match(r.message, /pinned data set could not be read: the checksum of the pinned part "Atomic weights" does not match/);
+      await page.click('#tab-data');
+      assert.match(await text(page, '#data-unreadable-reason'), /checksum of the pinned part "Atomic weights" does not match its content/);
+      assert.equal(await page.evaluate((k) => window.__stubWorkbook.file().settings[k], DATA_KEY), damaged);
+      await fitsWidth(page);
+      await shot(page, '32-data-set-unreadable', '#tab-data');
+      await page.click('#data-remove');
+      await confirmDialog(page, true);
+      await waitIdle(page);
+      assert.equal(await page.evaluate((k) => window.__stubWorkbook.file().settings[k] ?? null, DATA_KEY), null);
+      assert.ok(Math.abs((await plateNi(page)) - plateMinutes(NI)) < 1e-9);
     },
   },
 ];

@@ -5,7 +5,10 @@
 import { readFileSync } from 'node:fs';
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { TABLEINFO, excelSerial } from '../../functions/families/provenance';
-import { useStoredValue } from '../../functions/workbookHost';
+import { usePinnedValue, useStoredValue } from '../../functions/workbookHost';
+import { builtinPartChecksums, dataSetChecksum } from '../../src/dataset/checksum';
+import { BUILTIN_PARTS, DATA_PARTS } from '../../src/dataset/parts';
+import { writePinnedText } from '../../src/dataset/pinned';
 import { applyChange, pinnedCopy } from '../../src/store/copy';
 import { recordsOf } from '../../src/store/rows';
 import { builtinChecksum, writeStoredText } from '../../src/store/stored';
@@ -31,6 +34,17 @@ describe('TABLEINFO in the production bundle (built-in table)', () => {
     expect(one(await call('electrodes'))).toBe(builtin.electrodes.length);
     expect(one(await call('addin'))).toBe(pkgVersion); // the version baked in at build
   });
+  it('answers the data set: its version, its checksum over every part\'s, the parts pinned, one part\'s checksum', async () => {
+    const table = builtinChecksum(builtin);
+    expect(one(await call('dataset'))).toBe(builtin.version);
+    expect(one(await call('datasetchecksum'))).toBe(dataSetChecksum({ table, ...builtinPartChecksums() }));
+    expect(one(await call('pinned'))).toBe('none');
+    expect(one(await call('checksum:table'))).toBe(table);
+    expect(one(await call('Checksum: AtomicWeights'))).toBe(builtinPartChecksums().atomicweights);
+    const r = one(await call('checksum:lasers')) as { code: string; message: string };
+    expect(r.code).toBe('#N/A');
+    expect(r.message).toMatch(/^unknown part "lasers" of the data set; the parts are "table", "atomicweights", "species"/);
+  });
   it('ignores case and spaces around the field; a range of fields spills', async () => {
     expect(one(await call(' Origin '))).toBe('built-in');
     const r = await call([['version'], ['couples'], ['addin']]);
@@ -47,7 +61,7 @@ describe('TABLEINFO in the production bundle (built-in table)', () => {
   it('an unknown field is #N/A listing the fields; an omitted field is #VALUE!', async () => {
     const r = one(await call('owner')) as { code: string; message: string };
     expect(r.code).toBe('#N/A');
-    expect(r.message).toBe('unknown field "owner"; the fields are "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin"');
+    expect(r.message).toBe('unknown field "owner"; the fields are "origin", "version", "checksum", "revision", "changed", "couples", "electrodes", "addin", "dataset", "datasetchecksum", "pinned", or "checksum:<part>" for one part of the data set');
     expect(isError(one(await call(null)), '#VALUE!')).toBe(true);
   });
 });
@@ -88,6 +102,22 @@ describe('TABLEINFO with a workbook table (the channel the pane and the start-up
     expect(v.code).toBe('#N/A');
     expect(v.message).toMatch(/could not be read/);
     expect(f('addin')).toBe(pkgVersion);
+  });
+  it('a workbook that pins every part: "pinned" lists them, the data set keeps the built-in checksum; a changed part changes its own checksum', () => {
+    useStoredValue(writeStoredText({ ...pinnedCopy(builtin), revision: 1, changedAt: '2026-03-04T12:00:00.000Z' }));
+    const builtinSet = dataSetChecksum({ table: builtinChecksum(builtin), ...builtinPartChecksums() });
+    usePinnedValue(writePinnedText({ version: builtin.version, pinnedAt: '2026-03-04T12:00:00.000Z' }));
+    expect(f('pinned')).toBe(['table', ...DATA_PARTS].join(', '));
+    expect(f('datasetchecksum')).toBe(builtinSet);
+    const aw = JSON.parse(JSON.stringify(BUILTIN_PARTS.atomicweights)) as typeof BUILTIN_PARTS.atomicweights;
+    aw.elements[0].atomicWeight = 1.00794; // hydrogen as IUPAC gave it before the 2009 intervals (from memory)
+    usePinnedValue(writePinnedText({ version: '2025.1', pinnedAt: '2025-03-04T12:00:00.000Z', parts: { atomicweights: aw } }));
+    expect(f('pinned')).toBe('table, atomicweights');
+    expect(f('dataset')).toBe('2025.1');
+    expect(f('checksum:atomicweights')).not.toBe(builtinPartChecksums().atomicweights);
+    expect(f('checksum:species')).toBe(builtinPartChecksums().species);
+    expect(f('datasetchecksum')).not.toBe(builtinSet);
+    usePinnedValue(null);
   });
   it('excelSerial: 1970-01-01 is 25569 and 1900-03-01 is 61 (Excel 1900 date system)', () => {
     expect(excelSerial('1970-01-01T00:00:00Z')).toBe(25569);

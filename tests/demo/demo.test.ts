@@ -13,7 +13,7 @@ import { scenario } from '../../demo/scenario.mjs';
 import { cellwrightCalls, evaluate, isErrorValue, parseAddress, parseFormula, unwrap } from '../../scripts/lib/formula.mjs';
 import type { Scalar, Value } from '../../scripts/lib/formula.mjs';
 import { loadBundleWithTable } from '../../scripts/lib/tablehost.mjs';
-import { TABLE_SETTING_KEY, readSetting } from '../../scripts/lib/webextension.mjs';
+import { PINNED_DATA_KEY, TABLE_SETTING_KEY, readSetting } from '../../scripts/lib/webextension.mjs';
 import { layoutSheet } from '../../scripts/lib/workbook.mjs';
 import { fromSavedFormula } from '../../scripts/lib/saved-form.mjs';
 import { loadBundle, type LoadedBundle } from '../bundle/harness';
@@ -24,6 +24,7 @@ const XLSX = resolve(ROOT, 'demo/cellwright-demo.xlsx');
 let run: { status: number | null; stdout: string; stderr: string; ms: number };
 let wb: ExcelJS.Workbook;
 let bundle: LoadedBundle;
+let pinnedParts: readonly string[] = [];
 
 /** A cell's stored value as the evaluator sees it: formulas give their cached result. */
 function stored(cell: ExcelJS.Cell): Scalar {
@@ -86,10 +87,19 @@ beforeAll(async () => {
   if (existsSync(XLSX)) await wb.xlsx.readFile(XLSX);
   // the functions with the table the workbook carries in its add-in settings (the pinned built-in table)
   const setting = existsSync(XLSX) ? await readSetting(readFileSync(XLSX), TABLE_SETTING_KEY) : { found: false as const };
-  bundle = setting.found ? (await loadBundleWithTable(setting.value)).bundle : loadBundle();
+  const pinned = existsSync(XLSX) ? await readSetting(readFileSync(XLSX), PINNED_DATA_KEY) : { found: false as const };
+  if (setting.found) {
+    const loaded = await loadBundleWithTable(setting.value, undefined, pinned.found ? pinned.value : null);
+    bundle = loaded.bundle;
+    pinnedParts = loaded.status.dataset?.pinned ?? [];
+  } else bundle = loadBundle();
 }, 60_000);
 
 describe('npm run demo', () => {
+  it('writes a workbook that carries its whole data set pinned (the table and the reference data)', () => {
+    expect(pinnedParts).toEqual(['table', 'atomicweights', 'species', 'debyehuckel', 'water', 'electrolysis', 'units', 'anodes', 'cpcriteria', 'galvanicseries']);
+  });
+
   it('runs in seconds without an unexpected error and prints every sheet', () => {
     expect(run.stderr).toBe('');
     expect(run.status, run.stdout.split('\n').slice(-30).join('\n')).toBe(0);

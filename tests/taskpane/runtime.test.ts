@@ -11,12 +11,16 @@ import { COMPUTED_WITH_KEY, TABLE_SETTING_KEY } from '../../workbook/store';
 import { applyChange, pinnedCopy } from '../../src/store/copy';
 import { writeStoredText } from '../../src/store/stored';
 import { loadBundle } from '../bundle/harness';
+import { COMPUTED_WITH_DATA_KEY } from '../../workbook/pinnedData';
+import { builtinPartChecksums, partChecksum } from '../../src/dataset/checksum';
 import { builtin } from '../store/fixtures';
 import { FakeCfError, WorkbookFile, customFunctionsGlobal, excelFor, officeFor } from './mockExcel';
 
 const B = builtin();
 const g = globalThis as Record<string, unknown>;
 const cuBuiltin = B.couples.find((c) => c.key === 'Cu2+/Cu')!.e0;
+/** What a workbook records as computed with the add-in's built-in reference data (every part besides the table). */
+const BUILTIN_DATA = partChecksum({ ...builtinPartChecksums() });
 
 function storedWithCu(e0: number, revision = 1): string {
   const copy = applyChange(null, B, { kind: 'put', rowKind: 'couple', originalKey: 'Cu2+/Cu', record: { ...B.couples.find((c) => c.key === 'Cu2+/Cu')!, e0, source: 'workbook' } });
@@ -71,7 +75,7 @@ describe('functions runtime start-up', () => {
 
   it('in Excel, look-ups wait for the workbook table and answer from it (never from the built-in table first)', async () => {
     // The workbook's results were last computed with this very table (recorded), so nothing is recalculated.
-    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35)) });
+    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35)), [COMPUTED_WITH_DATA_KEY]: BUILTIN_DATA });
     let open!: () => void;
     file.gate = new Promise<void>((r) => (open = r));
     g.Office = officeFor('Excel');
@@ -171,7 +175,7 @@ describe('functions runtime start-up', () => {
   });
 
   it('a table changed elsewhere (settings changed event) is read, used and recalculated', async () => {
-    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35, 1), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35, 1)) });
+    const file = new WorkbookFile({ [TABLE_SETTING_KEY]: storedWithCu(0.35, 1), [COMPUTED_WITH_KEY]: checksumOf(storedWithCu(0.35, 1)), [COMPUTED_WITH_DATA_KEY]: BUILTIN_DATA });
     g.Office = officeFor('Excel');
     g.Excel = excelFor(file);
     const { STDPOTENTIAL } = await startRuntime();

@@ -1,0 +1,42 @@
+/**
+ * Checksums of the data set: one per part ("sha256:" + SHA-256 of the part's canonical JSON, the same
+ * helpers as the potential table's checksum) and one for the whole data set, over the per-part
+ * checksums. Equal data always gives equal checksums, whatever version or time it was pinned at.
+ */
+import { canonicalJson } from '../store/canonical';
+import { sha256Hex } from '../store/sha256';
+import { BUILTIN_PARTS, DATA_PARTS, type DataPartName } from './parts';
+
+/**
+ * The checksum of one part's content.
+ *
+ * Syntax: partChecksum(content)
+ * Example: partChecksum({ a: 1 }) → "sha256:015abd7f…"
+ */
+export function partChecksum(content: unknown): string {
+  return `sha256:${sha256Hex(canonicalJson(content))}`;
+}
+
+let builtinSums: Readonly<Record<DataPartName, string>> | null = null;
+
+/** The checksums of the add-in's built-in parts (computed once). */
+export function builtinPartChecksums(): Readonly<Record<DataPartName, string>> {
+  if (builtinSums === null) {
+    const sums = {} as Record<DataPartName, string>;
+    for (const p of DATA_PARTS) sums[p] = partChecksum(BUILTIN_PARTS[p]);
+    builtinSums = Object.freeze(sums);
+  }
+  return builtinSums;
+}
+
+/**
+ * The data set's checksum: "sha256:" + SHA-256 of the canonical JSON of { table, <part>: checksum, … },
+ * the potential table's checksum and every other part's.
+ *
+ * Syntax: dataSetChecksum({ table, atomicweights, … })
+ */
+export function dataSetChecksum(sums: Readonly<Record<'table' | DataPartName, string>>): string {
+  const ordered: Record<string, string> = {};
+  for (const k of ['table', ...DATA_PARTS] as const) ordered[k] = sums[k];
+  return partChecksum(ordered);
+}
