@@ -9,17 +9,22 @@ import type { PotentialTable } from './types';
 
 /** The signatures of each table's couple keys (see coupleKeySignature), made when first needed. */
 const signatures = new WeakMap<PotentialTable, Set<number>>();
+/** The table asked last and its signatures (a range asks about one table many times). */
+let last: { table: PotentialTable | null; signatures: Set<number> } = { table: null, signatures: new Set() };
 /**
  * False when the key, written the other way round, cannot be a couple of the table: its signature is
  * no key's, so it is not written out and looked up (a range of distinct unknown keys asks once per key).
  */
 function reversedMayExist(table: PotentialTable, key: string): boolean {
-  let s = signatures.get(table);
-  if (s === undefined) {
-    s = new Set(table.couples.map((c) => coupleKeySignature(c.key)));
-    signatures.set(table, s);
+  if (table !== last.table) {
+    let s = signatures.get(table);
+    if (s === undefined) {
+      s = new Set(table.couples.map((c) => coupleKeySignature(c.key)));
+      signatures.set(table, s);
+    }
+    last = { table, signatures: s };
   }
-  return s.has(coupleKeySignature(key, true));
+  return last.signatures.has(coupleKeySignature(key, true));
 }
 
 /**

@@ -46,7 +46,12 @@ function looseHash(key: string): number {
   return h >>> 0;
 }
 
+/** The table asked last and its suggestions (a range asks about one table many times). */
+const last = { couple: { table: null as PotentialTable | null, s: null as Suggestions | null }, electrode: { table: null as PotentialTable | null, s: null as Suggestions | null } };
+
 function suggestionsOf(table: PotentialTable, kind: 'couple' | 'electrode'): Suggestions {
+  const l = last[kind];
+  if (l.table === table && l.s !== null) return l.s;
   let s = cache[kind].get(table);
   if (s === undefined) {
     const keys = kind === 'couple' ? table.couples.map((r) => r.key) : table.electrodes.map((r) => r.key);
@@ -57,6 +62,8 @@ function suggestionsOf(table: PotentialTable, kind: 'couple' | 'electrode'): Sug
     s = { near, hashes: new Set(keys.map(looseHash)), example, otherwise: Object.freeze(example === undefined ? {} : { example }) };
     cache[kind].set(table, s);
   }
+  l.table = table;
+  l.s = s;
   return s;
 }
 
