@@ -12,7 +12,7 @@ import { coupleKeyHint, electrodeKeyHint } from '../src/table/suggest';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from '../src/table/types';
 import { currentTable } from './context';
 import { type Domain, domains } from './domains';
-import { asResultError, invalidValue, isErrorValue, notAvailable, toExcelError } from './excelErrors';
+import { asResultError, invalidValue, isErrorValue, notAvailable, notAvailableNaming, toExcelError } from './excelErrors';
 import type { ArgSpec, ArgValue } from './spec';
 
 /** A converter: the converted value, or an Excel error value. */
@@ -139,17 +139,22 @@ export function makeConverter(spec: ArgSpec): Converter {
   }
 }
 
-/* Look-ups, memoized per table: a range of keys repeats the same few keys many times. */
+/*
+ * Look-ups, memoized per table: a range of keys repeats the same few keys many times. Only rows
+ * found are kept. An unknown key is answered afresh (about a microsecond; within one call the
+ * element loop already converts each distinct text once): keeping a million distinct unknown keys'
+ * errors in a long-lived map cost more than making them, and would evict the known keys.
+ */
 let memoTable: PotentialTable | null = null;
-const coupleMemo = new Map<string, CoupleRow | CustomFunctions.Error>();
-const electrodeMemo = new Map<string, ElectrodeRow | CustomFunctions.Error>();
+const coupleMemo = new Map<string, CoupleRow>();
+const electrodeMemo = new Map<string, ElectrodeRow>();
 
 /**
  * Looks a key up in the table in use through a memo that is emptied whenever the table changes
  * (a changed table is a new object, see context.ts). An unknown key answers `missing(key)`.
  */
 function memoLookUp<Row>(
-  memo: Map<string, Row | CustomFunctions.Error>,
+  memo: Map<string, Row>,
   key: string,
   find: (table: PotentialTable, key: string) => Row | undefined,
   missing: (key: string, table: PotentialTable) => CustomFunctions.Error,
@@ -165,22 +170,33 @@ function memoLookUp<Row>(
     coupleMemo.clear();
     electrodeMemo.clear();
   }
-  let hit = memo.get(key);
-  if (hit === undefined) {
-    hit = find(table, key) ?? missing(key, table);
+  let row = memo.get(key);
+  if (row === undefined) {
+    row = find(table, key);
+    if (row === undefined) return missing(key, table);
     if (memo.size >= MEMO_LIMIT) memo.clear();
-    memo.set(key, hit);
+    memo.set(key, row);
   }
-  return hit;
+  return row;
 }
 
+/** Where an unknown key's message sends the reader, per kind of key. */
+const UNKNOWN = {
+  couple: { before: 'unknown couple ', where: 'the potential table' },
+  'reference electrode': { before: 'unknown reference electrode ', where: 'the electrode table' },
+} as const;
 
-/** "unknown couple "X"; …" with a key that exists in this table, or a near match of what was typed. */
-function unknownKeyMessage(what: 'couple' | 'reference electrode', where: string, key: string, table: PotentialTable): string {
+/** The last "; use a key of … such as …" made, kept: the same text ends every message of a range. */
+let tail = { where: '', example: '', text: '' };
+
+/** #N/A "unknown couple "X"; …" with a key that exists in this table, or a near match of what was typed. */
+function unknownKey(what: 'couple' | 'reference electrode', key: string, table: PotentialTable): CustomFunctions.Error {
+  const { before, where } = UNKNOWN[what];
   const s = suggestKey(table, what === 'couple' ? 'couple' : 'electrode', key);
-  if (s.near !== undefined) return `unknown ${what} ${show(key)}; did you mean "${s.near}"?`;
-  if (s.example !== undefined) return `unknown ${what} ${show(key)}; use a key of ${where} such as "${s.example}"`;
-  return `unknown ${what} ${show(key)}; ${where} has no ${what}s`;
+  if (s.near !== undefined) return notAvailable(`${before}${show(key)}; did you mean "${s.near}"?`);
+  if (s.example === undefined) return notAvailable(`${before}${show(key)}; ${where} has no ${what}s`);
+  if (tail.where !== where || tail.example !== s.example) tail = { where, example: s.example, text: `; use a key of ${where} such as "${s.example}"` };
+  return notAvailableNaming(before, key, tail.text);
 }
 
 function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
@@ -190,7 +206,7 @@ function lookUpCouple(key: string): CoupleRow | CustomFunctions.Error {
     (t, k) => t.findCouple(k),
     (k, t) => {
       const h = coupleKeyHint(t, k, false);
-      return notAvailable(h ? `unknown couple ${show(k)}; ${h}` : unknownKeyMessage('couple', 'the potential table', k, t));
+      return h ? notAvailable(`unknown couple ${show(k)}; ${h}`) : unknownKey('couple', k, t);
     },
   );
 }
@@ -202,7 +218,7 @@ function lookUpElectrode(key: string): ElectrodeRow | CustomFunctions.Error {
     (t, k) => t.findElectrode(k),
     (k, t) => {
       const h = electrodeKeyHint(t, k, false);
-      return notAvailable(h ? `unknown reference electrode ${show(k)}; ${h}` : unknownKeyMessage('reference electrode', 'the electrode table', k, t));
+      return h ? notAvailable(`unknown reference electrode ${show(k)}; ${h}`) : unknownKey('reference electrode', k, t);
     },
   );
 }

@@ -7,6 +7,7 @@
  * shows none) and is one shared value.
  */
 import { DomainError, InputError, NotFoundError } from '../src/errors';
+import { quote } from '../src/text/quote';
 
 /** What one element of a result may be before it reaches Excel. */
 export type Cell = number | string | boolean | CustomFunctions.Error;
@@ -48,6 +49,34 @@ function tidyMessage(message: string): string {
 /** #N/A with a message. */
 export function notAvailable(message: string): CustomFunctions.Error {
   return new (errorClass())(codes().notAvailable, tidyMessage(message));
+}
+/** The last fixed parts notAvailableNaming found fit for a one-line message, with the quotes joined on. */
+const fit = { before: '', after: '', open: '', close: '' };
+
+/**
+ * #N/A whose message is `before`, the text as quote() writes it, then `after`: the same message as
+ * notAvailable(before + quote(text) + after), built without scanning it. The fixed parts repeat
+ * from cell to cell (a range of a million distinct unknown keys has one `before` and one `after`),
+ * so they are checked when they change, not per cell; a short text of printable ASCII without
+ * quotes is quoted as it stands. Such a key then costs one joined string and one error value.
+ */
+export function notAvailableNaming(before: string, text: string, after: string): CustomFunctions.Error {
+  if (before !== fit.before || after !== fit.after || fit.open === '') {
+    const open = `${before}"`;
+    const close = `"${after}`;
+    if (!ONE_LINE.test(open + close) || open.length + close.length + 80 > MAX_MESSAGE) return notAvailable(before + quote(text) + after);
+    fit.before = before;
+    fit.after = after;
+    fit.open = open;
+    fit.close = close;
+  }
+  // Printable ASCII but '"', at most 40 characters: quote() would return it unchanged, in quotes.
+  if (text.length > 40) return notAvailable(before + quote(text) + after);
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c <= 32 || c === 34 || c >= 127) return notAvailable(before + quote(text) + after);
+  }
+  return new (errorClass())(codes().notAvailable, fit.open + text + fit.close);
 }
 /** #VALUE! with a message. */
 export function invalidValue(message: string): CustomFunctions.Error {

@@ -274,8 +274,9 @@ function printCase(r) {
     return;
   }
   if (name === 'unknown-keys') {
+    const alone = r.coreMs === undefined ? '' : `, the error values alone ${r.coreMs.toFixed(0)} ms (${(r.coreMs / r.bareMs).toFixed(2)} × known)`;
     console.log(
-      `${name.padEnd(18)} STDPOTENTIAL over 1,000,000 cells: distinct unknown keys ${r.entryMs.toFixed(0)} ms, known keys ${r.bareMs.toFixed(0)} ms, unknown/known ${(r.entryMs / r.bareMs).toFixed(2)}  target ≤ 5: ${r.entryMs / r.bareMs <= 5 ? 'met' : 'MISSED'}`,
+      `${name.padEnd(18)} STDPOTENTIAL over 1,000,000 cells: distinct unknown keys ${r.entryMs.toFixed(0)} ms, known keys ${r.bareMs.toFixed(0)} ms, unknown/known ${(r.entryMs / r.bareMs).toFixed(2)}${alone}  target ≤ 5: ${r.entryMs / r.bareMs <= 5 ? 'met' : 'MISSED'}`,
     );
     return;
   }
@@ -464,6 +465,19 @@ function main() {
       0.2,
       () => fn(unknownKeys, null, INVOCATION),
       () => fn(knownKeys, null, INVOCATION),
+      // the "core" part here: only making one error value per cell whose message names its key, as
+      // the entry point must (the harness's CustomFunctions.Error, the message joined from three parts)
+      () => {
+        const Err = fns.sandbox.CustomFunctions.Error;
+        const open = 'unknown couple "';
+        const close = '"; use a key of the potential table such as "Cu2+/Cu"';
+        return () =>
+          unknownKeys.map((row) => {
+            const line = new Array(row.length);
+            for (let c = 0; c < row.length; c++) line[c] = new Err('#N/A', open + row[c] + close);
+            return line;
+          });
+      },
     );
   }
 

@@ -3,8 +3,29 @@
  * an Ag/AgCl electrode named without one, or the nearest valid keys by edit distance.
  */
 import { asciiFormula } from '../chem/asciiFormula';
+import { coupleKeySignature } from './coupleKeySignature';
 import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
 import type { PotentialTable } from './types';
+
+/** The signatures of each table's couple keys (see coupleKeySignature), made when first needed. */
+const signatures = new WeakMap<PotentialTable, Set<number>>();
+/** The table asked last and its signatures (a range asks about one table many times). */
+let last: { table: PotentialTable | null; signatures: Set<number> } = { table: null, signatures: new Set() };
+/**
+ * False when the key, written the other way round, cannot be a couple of the table: its signature is
+ * no key's, so it is not written out and looked up (a range of distinct unknown keys asks once per key).
+ */
+function reversedMayExist(table: PotentialTable, key: string): boolean {
+  if (table !== last.table) {
+    let s = signatures.get(table);
+    if (s === undefined) {
+      s = new Set(table.couples.map((c) => coupleKeySignature(c.key)));
+      signatures.set(table, s);
+    }
+    last = { table, signatures: s };
+  }
+  return last.signatures.has(coupleKeySignature(key, true));
+}
 
 /**
  * Why a couple key was not found and what to write instead: "write Ox/Red: Zn2+/Zn" when the key
@@ -18,7 +39,7 @@ import type { PotentialTable } from './types';
  * See also: electrodeKeyHint, normalizeCoupleKey
  */
 export function coupleKeyHint(table: PotentialTable, key: string, withNearest = true): string {
-  const sides = splitCoupleKey(asciiFormula(key));
+  const sides = reversedMayExist(table, key) ? splitCoupleKey(asciiFormula(key)) : undefined;
   if (sides !== undefined) {
     const reversed = table.findCouple(`${sides.red}/${sides.ox}`);
     if (reversed !== undefined) return `write Ox/Red: ${reversed.key}`;

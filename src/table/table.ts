@@ -11,6 +11,7 @@ import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
 import { CellwrightError } from '../errors';
 import { MAX_FORMULA_CHARS, MAX_KEY_CHARS, MAX_NOTE_CHARS, MAX_SOURCE_CHARS } from '../textLimits';
 import { normalizeCoupleKey, normalizeElectrodeKey, splitCoupleKey } from './keys';
+import { coupleKeySignature } from './coupleKeySignature';
 import type { CoupleRow, ElectrodeRow, PotentialTable } from './types';
 import { quote } from '../text/quote';
 import { shorten } from '../text/shorten';
@@ -232,6 +233,8 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
   const couples: CoupleRow[] = [];
   const coupleIndex = new Map<string, CoupleRow>();
   const coupleRowAt = new Map<string, number>();
+  // A text whose signature no key has is no key: it is refused without reading its species.
+  const coupleSignatures = new Set<number>();
   coupleRecords.forEach((rec, index) => {
     const v = validateCoupleRecord(rec);
     if (v.row === undefined) {
@@ -246,6 +249,7 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
     }
     coupleRowAt.set(k, index);
     coupleIndex.set(k, v.row);
+    coupleSignatures.add(coupleKeySignature(v.row.key));
     couples.push(v.row);
   });
 
@@ -283,7 +287,7 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
     couples,
     electrodes,
     findCouple(key: string): CoupleRow | undefined {
-      if (typeof key !== 'string') return undefined;
+      if (typeof key !== 'string' || !coupleSignatures.has(coupleKeySignature(key))) return undefined;
       return coupleIndex.get(normalizeCoupleKey(key));
     },
     findElectrode(key: string): ElectrodeRow | undefined {
