@@ -21,9 +21,11 @@ describe('convertPotential: handbook checks', () => {
     expect(conv(-0.85, 'CSE', 'SCE')).toBeCloseTo(-0.7752, 4);
     expect(conv(-0.85, 'Cu/CuSO4(sat)', 'Hg/Hg2Cl2/KCl(sat)')).toBeCloseTo(-0.7752, 4);
   });
-  it('… and about +0.25 V vs a zinc reference', () => {
-    // CP practice: −0.85 V vs CSE reads +0.25 V vs Zn (common practice, from memory; the table's zinc row is built on it)
-    expect(conv(-0.85, 'CSE', 'Zn/seawater')).toBeCloseTo(0.25, 3);
+  it('the seawater criteria −0.80 V vs Ag/AgCl and +0.25 V vs zinc are the same potential', () => {
+    // Cathwell, "Monitoring cathodic protection": −800 mV vs Ag/AgCl ≡ +250 mV vs Zn (seawater electrodes)
+    expect(conv(-0.8, 'Ag/AgCl/seawater', 'Zn/seawater')).toBeCloseTo(0.25, 9);
+    // the soil criterion −0.85 V CSE lands 16 mV short of it: −0.85 + 0.316 (Szabó & Bakos 2010) + 0.80 = +0.266 V vs Zn
+    expect(conv(-0.85, 'CSE', 'Zn/seawater')).toBeCloseTo(0.266, 9);
   });
   it('0 V vs RHE at pH 7 is −0.414 V vs SHE at 25 °C', () => {
     // E(H+/H2) at pH 7 = −0.414 V (the biochemists' E°′ of the hydrogen electrode, e.g. Lehninger; from memory);

@@ -54,6 +54,10 @@ describe('data/electrodes.json', () => {
     expect(t.findElectrode('Hg/Hg2Cl2/KCl(0.1M)')?.potential).toBe(0.3337); // Bard & Faulkner 2nd ed., inside back cover
     expect(t.findElectrode('Ag/AgCl/KCl(sat)')?.potential).toBe(0.197); // Bard & Faulkner 2nd ed., inside back cover
     expect(t.findElectrode('CSE')?.potential).toBe(0.316); // Szabó & Bakos, Int. J. Corros. 2010, Table 2
+    expect(t.findElectrode('Ag/AgCl/KCl(3M)')?.potential).toBe(0.21); // consultrsr.net reference-electrode table: Ag/AgCl, KCl (3M) 0.210 V vs NHE
+    expect(t.findElectrode('Ag/AgCl/seawater')?.potential).toBe(0.25); // Roberge, Corrosion Engineering (2008), Table 4.7: seawater ~0.250 V vs SHE
+    // zinc: −0.80 V vs Ag/AgCl ≡ +0.25 V vs Zn (Cathwell, "Monitoring cathodic protection") with Ag/AgCl/seawater at 0.250 V
+    expect(t.findElectrode('Zn/seawater')?.potential).toBeCloseTo(0.25 - 0.8 - 0.25, 9);
     expect(t.findElectrode('Hg/Hg2SO4/H2SO4(1M)')?.potential).toBe(0.6739); // Szabó & Bakos, Int. J. Corros. 2010, Table 2
     expect(t.findElectrode('Hg/HgO/NaOH(1M)')?.potential).toBe(0.1077); // J. Power Sources 161 (2006) 1217, abstract
   });

@@ -12,7 +12,7 @@ const row = (k: string): ElectrodeRow => builtinTable().findElectrode(k)!;
 describe('refPotential', () => {
   it('returns the stored value at 25 °C, also for rows without dE/dT', () => {
     expect(refPotential(row('SCE'), 25)).toBe(0.2412); // Bard & Faulkner 2nd ed., inside back cover
-    expect(refPotential(row('Ag/AgCl/KCl(3M)'), 25)).toBe(0.21); // common practice (makers' data, 3 mol/L KCl)
+    expect(refPotential(row('Ag/AgCl/KCl(3M)'), 25)).toBe(0.21); // consultrsr.net reference-electrode table, row Ag/AgCl, KCl (3M): 0.210 V vs NHE
   });
   it('SCE falls as Sawyer et al. tabulate from 15 to 35 °C', () => {
     // Sawyer, Sobkowiak & Roberts (1995) §5.2, saturated calomel vs SHE (with junction), read in the copy at
