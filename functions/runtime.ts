@@ -28,7 +28,8 @@
 import { hostStatus, installFunctionsHost, installReadFailure, installStoredValue, lastStoredValue, readTicket, startTableLoad } from './workbookHost';
 import { lastPinnedValue } from './dataHost';
 import { readComputedWithData, readPinnedValue, recordComputedWithData } from '../workbook/pinnedData';
-import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll, sameStoredValue } from '../workbook/store';
+import { TABLE_SETTING_KEY, computedWithOf, readComputedWith, readStoredValue, recalculateAll } from '../workbook/store';
+import { sameStoredValue } from '../workbook/settings';
 
 /** How long the functions wait for Excel to hand over the workbook's table at start-up. */
 export const START_TIMEOUT_MS = 60_000;

@@ -13,7 +13,8 @@ import { BUILTIN_PARTS, DATASET_VERSION } from '../src/dataset/parts';
 import { type PinnedData, partsWithPinned, writePinnedText } from '../src/dataset/pinned';
 import type { CellwrightFunctionsHost } from '../workbook/channel';
 import { type PinnedState, type PinnedWriteOutcome, interpretPinned, readPinnedValue, recordComputedWithData, replacePinnedValue } from '../workbook/pinnedData';
-import { computedWithOf, recalculateAll, sameStoredValue } from '../workbook/store';
+import { computedWithOf, recalculateAll } from '../workbook/store';
+import { sameStoredValue } from '../workbook/settings';
 import { type ActionResult, compareVersions } from './model';
 
 export interface DataModelDeps {

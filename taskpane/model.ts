@@ -16,7 +16,8 @@ import { type TableRecords, type VersionedRecords, cleanRecord, matchKey, rowsOf
 import { type LogAction, type Signoff } from '../src/store/log';
 import { builtinChecksum } from '../src/store/stored';
 import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../workbook/channel';
-import { type StoredState, type WriteOutcome, computedWithOf, readStoredValue, interpret, recalculateAll, removeTable, sameStoredValue, writeCopy } from '../workbook/store';
+import { type StoredState, type WriteOutcome, computedWithOf, readStoredValue, interpret, recalculateAll, removeTable, writeCopy } from '../workbook/store';
+import { sameStoredValue } from '../workbook/settings';
 
 export interface ModelDeps {
   readonly builtin: VersionedRecords;

@@ -7,7 +7,7 @@
  * that cannot be read is never written over except by an explicit reset naming it.
  */
 import { type PinnedProblem, type PinnedRead, readPinnedText } from '../src/dataset/pinned';
-import { sameStoredValue } from './store';
+import { readSetting, replaceSetting } from './settings';
 
 /** The settings key of the pinned data. */
 export const PINNED_DATA_KEY = 'cellwright.pinnedData';
@@ -22,16 +22,6 @@ export type PinnedState =
   | { readonly kind: 'none'; readonly raw: null }
   | { readonly kind: 'readable'; readonly raw: string; readonly read: Extract<PinnedRead, { ok: true }> }
   | { readonly kind: 'unreadable'; readonly raw: unknown; readonly problem: PinnedProblem };
-
-async function readSetting(key: string): Promise<unknown> {
-  return Excel.run(async (context) => {
-    const item = context.workbook.settings.getItemOrNullObject(key);
-    item.load('value');
-    await context.sync();
-    const value: unknown = item.isNullObject ? null : item.value;
-    return value;
-  });
-}
 
 /** Reads the pinned-data value (null when the workbook has none). */
 export async function readPinnedValue(): Promise<unknown> {
@@ -62,23 +52,8 @@ export type PinnedWriteOutcome =
  * then reads it back.
  */
 export async function replacePinnedValue(seen: unknown, next: string | null): Promise<PinnedWriteOutcome> {
-  const before = await Excel.run(async (context) => {
-    const settings = context.workbook.settings;
-    const item = settings.getItemOrNullObject(PINNED_DATA_KEY);
-    item.load('value');
-    await context.sync();
-    const current: unknown = item.isNullObject ? null : item.value;
-    if (!sameStoredValue(current, seen)) return { changed: true as const, current };
-    if (next === null) {
-      if (!item.isNullObject) item.delete();
-    } else settings.add(PINNED_DATA_KEY, next);
-    await context.sync();
-    return { changed: false as const, current };
-  });
-  if (before.changed) return { kind: 'conflict', state: interpretPinned(before.current) };
-  const after = await readPinnedValue();
-  const state = interpretPinned(after);
-  return sameStoredValue(after, next) ? { kind: 'written', state } : { kind: 'overwritten', state };
+  const r = await replaceSetting(PINNED_DATA_KEY, seen, next);
+  return { kind: r.kind, state: interpretPinned(r.value) };
 }
 
 /** Records COMPUTED_WITH_DATA_KEY (after a recalculation Cellwright asked for); a read-only workbook only recalculates again next time. */

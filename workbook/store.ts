@@ -17,6 +17,7 @@ import { ChangeError, type WorkbookCopy } from '../src/store/copy';
 import { type LogAction, type Signoff, EMPTY_LOG, appendEntry, logEntry, signoffProblem } from '../src/store/log';
 import type { VersionedRecords } from '../src/store/rows';
 import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } from '../src/store/stored';
+import { readSetting, replaceSetting } from './settings';
 
 /** The settings key of the stored table. */
 export const TABLE_SETTING_KEY = 'cellwright.potentialTable';
@@ -37,12 +38,8 @@ export function computedWithOf(status: { readonly state: string; readonly checks
 
 /** Reads what COMPUTED_WITH_KEY holds (null when nothing is recorded). */
 export async function readComputedWith(): Promise<string | null> {
-  return Excel.run(async (context) => {
-    const item = context.workbook.settings.getItemOrNullObject(COMPUTED_WITH_KEY);
-    item.load('value');
-    await context.sync();
-    return item.isNullObject || typeof item.value !== 'string' ? null : item.value;
-  });
+  const v = await readSetting(COMPUTED_WITH_KEY);
+  return typeof v === 'string' ? v : null;
 }
 
 /** What the workbook holds. `raw` is the stored value exactly as read (for conflict checks and export). */
@@ -53,13 +50,7 @@ export type StoredState =
 
 /** Reads the stored value (null when the workbook has none). */
 export async function readStoredValue(): Promise<unknown> {
-  return Excel.run(async (context) => {
-    const item = context.workbook.settings.getItemOrNullObject(TABLE_SETTING_KEY);
-    item.load('value');
-    await context.sync();
-    const value: unknown = item.isNullObject ? null : item.value;
-    return value;
-  });
+  return readSetting(TABLE_SETTING_KEY);
 }
 
 /** Interprets a stored value. */
@@ -73,17 +64,6 @@ export function interpret(raw: unknown, builtin: VersionedRecords): StoredState 
 /** Reads and interprets what the workbook holds. */
 export async function readWorkbookTable(builtin: VersionedRecords): Promise<StoredState> {
   return interpret(await readStoredValue(), builtin);
-}
-
-/** True when two stored values are the same (texts compared exactly; other values by their JSON). */
-export function sameStoredValue(a: unknown, b: unknown): boolean {
-  if (a === null || a === undefined) return b === null || b === undefined;
-  if (typeof a === 'string' || typeof b === 'string') return a === b;
-  try {
-    return JSON.stringify(a) === JSON.stringify(b);
-  } catch {
-    return false;
-  }
 }
 
 export type WriteOutcome =
@@ -126,25 +106,8 @@ export async function removeTable(seen: unknown, builtin: VersionedRecords): Pro
 }
 
 async function replaceValue(seen: unknown, next: string | null, builtin: VersionedRecords): Promise<WriteOutcome> {
-  const before = await Excel.run(async (context) => {
-    const settings = context.workbook.settings;
-    const item = settings.getItemOrNullObject(TABLE_SETTING_KEY);
-    item.load('value');
-    await context.sync();
-    const current: unknown = item.isNullObject ? null : item.value;
-    if (!sameStoredValue(current, seen)) return { changed: true as const, current };
-    if (next === null) {
-      if (!item.isNullObject) item.delete();
-    } else {
-      settings.add(TABLE_SETTING_KEY, next);
-    }
-    await context.sync();
-    return { changed: false as const, current };
-  });
-  if (before.changed) return { kind: 'conflict', state: interpret(before.current, builtin) };
-  const after = await readStoredValue();
-  const state = interpret(after, builtin);
-  return sameStoredValue(after, next) ? { kind: 'written', state } : { kind: 'overwritten', state };
+  const r = await replaceSetting(TABLE_SETTING_KEY, seen, next);
+  return { kind: r.kind, state: interpret(r.value, builtin) };
 }
 
 /**
