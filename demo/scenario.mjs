@@ -245,13 +245,14 @@ export const scenario = {
         { label: 'CSE against SHE at 25 °C', formula: '=CELLWRIGHT.REFPOTENTIAL("CSE")', unit: 'V', digits: 4 },
         { label: 'CSE against SHE at the soil temperature', formula: '=CELLWRIGHT.REFPOTENTIAL("CSE",{soilT})', unit: 'V', digits: 4, note: 'the electrode sits in the soil: its own temperature counts' },
         { table: 'crit', caption: 'The criterion stated for each electrode, and why a converted one is not used', columns: [
-          { key: 'el', header: 'Electrode', values: ['CSE', 'Ag/AgCl/seawater', 'Zn/seawater'] },
+          { key: 'el', header: 'Electrode', values: ['CSE', 'Ag/AgCl/seawater', 'SCE', 'Zn/seawater'] },
           { key: 'c', header: 'Criterion as stated (instant-OFF)', unit: 'V', formula: '=CELLWRIGHT.PROTECTIONCRITERION({crit.el})', digits: 3 },
           { header: '−0.85 V CSE merely converted (not a criterion)', unit: 'V', formula: '=CELLWRIGHT.CONVERTPOTENTIAL(-0.85,"CSE",{crit.el})', digits: 3 },
           { header: 'Clause and source', formula: '=CELLWRIGHT.SOURCE({crit.el},"standard")' },
         ] },
         { text: 'Each reading is compared with the criterion the standard states for the electrode it was taken with. Converting −0.85 V CSE gives −0.784 V on Ag/AgCl/seawater, 16 mV less negative than the −0.80 V the standards state: readings between the two would pass a converted criterion and fail the stated one.' },
         { key: 'polCrit', label: 'Polarisation criterion (a separate condition)', formula: '=CELLWRIGHT.PROTECTIONCRITERION("CSE","polarisation")', unit: 'V shift', digits: 3 },
+        { key: 'srbCrit', label: 'Criterion where the soil has active sulfate-reducing bacteria (a separate condition)', formula: '=CELLWRIGHT.PROTECTIONCRITERION("CSE","anaerobic")', unit: 'V', digits: 3, note: 'ISO 15589-1 as quoted; see SOURCE("CSE","anaerobic")' },
         { table: 'survey', caption: 'Close-interval survey: ON and instant-OFF readings side by side, OFF referred to its electrode at 25 °C', columns: [
           { key: 'ts', header: 'Test station', values: ['TS-01', 'TS-02', 'TS-03', 'TS-04', 'TS-05', 'TS-06', 'TS-07', 'TS-08'] },
           { key: 'km', header: 'Chainage', unit: 'km', values: [0.0, 0.8, 1.6, 2.4, 3.1, 3.3, 4.0, 4.9] },

@@ -5,10 +5,10 @@
 import * as F from '../families/cp';
 
 /**
- * The cathodic-protection criterion the standards state for the reference electrode used, in V on that electrode (a criterion, never a verdict): −0.85 V CSE (NACE/AMPP SP0169; ISO 15589-1 Table 1; EN 12954), −0.80 V Ag/AgCl/seawater (DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2), +0.25 V vs zinc; "polarisation" gives the 100 mV shift. Compare a reading with the criterion stated for its own electrode, not a converted one; the clause and source are in the reference and in data/cp-criteria.json. #N/A with where to look for conditions whose value Cellwright does not hold (anaerobic/SRB, high temperature, high-strength steels, the most negative potential "limit").
+ * The cathodic-protection criterion the standards state for the reference electrode used, in V on that electrode (a criterion, never a verdict): −0.85 V CSE (NACE/AMPP SP0169; ISO 15589-1 Table 1; EN 12954), −0.80 V Ag/AgCl/seawater (DNV-RP-B401 Sec. 5; ISO 15589-2 §5.2; 49 CFR 192 App. D §IV.A), −0.78 V saturated calomel (49 CFR 192 App. D §IV.A), +0.25 V vs zinc; "polarisation" gives the 100 mV shift; "anaerobic" gives −0.95 V CSE where sulfate-reducing bacteria are active (ISO 15589-1, as quoted). Compare a reading with the criterion stated for its own electrode, not a converted one; the clause and source are in the reference and in data/cp-criteria.json. #N/A with where to look for values Cellwright does not hold (anaerobic seawater or sediments, high temperature, high-strength steels, the most negative potential "limit").
  * @customfunction PROTECTIONCRITERION
  * @helpurl https://localhost:3000/docs/functions.html#protectioncriterion
- * @param electrode Reference electrode of the reading: "CSE", "Ag/AgCl/seawater" or "Zn/seawater".
+ * @param electrode Reference electrode of the reading: "CSE", "Ag/AgCl/seawater", "SCE" or "Zn/seawater".
  * @param [condition] "standard", "polarisation", "limit", "anaerobic", "hightemperature" or "highstrength" (default "standard").
  * @returns Criterion in V on the electrode (a shift in V for "polarisation").
  */

@@ -43,7 +43,7 @@ function halfreaction(couple: any[][]): any[][] {
  * @customfunction SOURCE
  * @helpurl https://localhost:3000/docs/functions.html#source
  * @param couple Key of the potential table: a couple written Ox/Red, or a reference electrode (e.g. "CSE").
- * @param [criterion] With an electrode key: a protection-criterion condition ("standard" or "polarisation"), to get the clause and source of PROTECTIONCRITERION's answer.
+ * @param [criterion] With an electrode key: a protection-criterion condition ("standard", "polarisation", "anaerobic", as PROTECTIONCRITERION takes them), to get the clause and source of PROTECTIONCRITERION's answer.
  * @returns The source (text).
  */
 function source(couple: any[][], criterion?: any[][]): any[][] {

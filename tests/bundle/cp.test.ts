@@ -14,18 +14,24 @@ const msg = (v: unknown): string => String((v as { message?: string }).message ?
 
 describe('PROTECTIONCRITERION and SOURCE', () => {
   it('criteria per electrode as stated, over a column of electrodes', async () => {
-    const r = await call('PROTECTIONCRITERION', [['CSE'], ['Cu/CuSO4'], ['Ag/AgCl/seawater'], ['Zn/seawater'], ['SCE']]);
-    expect(r.slice(0, 4).map((x) => x[0])).toEqual([-0.85, -0.85, -0.8, 0.25]); // SP0169 / ISO 15589-1; DNV-RP-B401 Sec. 5; Peabody 1973
-    expect(isError(r[4][0], '#N/A')).toBe(true);
+    const r = await call('PROTECTIONCRITERION', [['CSE'], ['Cu/CuSO4'], ['Ag/AgCl/seawater'], ['Zn/seawater'], ['SCE'], ['SHE']]);
+    // SP0169 / ISO 15589-1; DNV-RP-B401 Sec. 5 and 49 CFR 192 App. D §IV.A; Peabody 1973; 49 CFR 192 App. D §IV.A (saturated calomel −0.78 V)
+    expect(r.slice(0, 5).map((x) => x[0])).toEqual([-0.85, -0.85, -0.8, 0.25, -0.78]);
+    expect(isError(r[5][0], '#N/A')).toBe(true);
   });
   it('conditions: 100 mV polarisation, the seawater limit, and #N/A naming the standard for SRB', async () => {
     expect(one(await call('PROTECTIONCRITERION', 'CSE', 'polarisation'))).toBe(0.1);
     const limit = one(await call('PROTECTIONCRITERION', 'Ag/AgCl/seawater', 'limit')); // ISO 15589-2 §5.2, not read: not held
     expect(isError(limit, '#N/A')).toBe(true);
     expect(msg(limit)).toMatch(/ISO 15589-2/);
-    const srb = one(await call('PROTECTIONCRITERION', 'CSE', 'anaerobic'));
+    // ISO 15589-1 as quoted in World Pipelines Aug 2015 p. 118 (−950 mV with active MIC) and KFUPM notes §5.6: −0.95 V CSE
+    expect(one(await call('PROTECTIONCRITERION', 'CSE', 'anaerobic'))).toBe(-0.95);
+    const srb = one(await call('PROTECTIONCRITERION', 'Ag/AgCl/seawater', 'anaerobic')); // DNV-RP-B401 / ISO 15589-2 sediments: not read
     expect(isError(srb, '#N/A')).toBe(true);
-    expect(msg(srb)).toMatch(/ISO 15589-1/);
+    expect(msg(srb)).toMatch(/ISO 15589-2/);
+    const hot = one(await call('PROTECTIONCRITERION', 'CSE', 'hightemperature'));
+    expect(isError(hot, '#N/A')).toBe(true);
+    expect(msg(hot)).toMatch(/ISO 15589-1/);
     expect(isError(one(await call('PROTECTIONCRITERION', 'CSE', 'damp')), '#VALUE!')).toBe(true);
   });
   it('SOURCE answers for an electrode key as well as a couple', async () => {
@@ -33,6 +39,7 @@ describe('PROTECTIONCRITERION and SOURCE', () => {
     expect(one(await call('SOURCE', 'Cu2+/Cu'))).toMatch(/Thermoddem/); // data/couples.json: the row's cited database
     expect(isError(one(await call('SOURCE', 'nothing')), '#N/A')).toBe(true);
     expect(one(await call('SOURCE', 'Ag/AgCl/seawater', 'standard'))).toMatch(/DNV-RP-B401 Sec\. 5.*Source: /);
+    expect(one(await call('SOURCE', 'CSE', 'anaerobic'))).toMatch(/ISO 15589-1.*Source: World Pipelines/);
     expect(one(await call('SOURCE', 'CSE', null))).toMatch(/Szabó & Bakos/);
   });
 });
@@ -124,7 +131,7 @@ describe('ranges: each function spills a column element by element, a bad elemen
     ['WENNERRESISTIVITY', [3, 5], 1, [2, 5, 8, -1], 3],
     ['LAYERRESISTIVITY', [1.5, 10, 3, 4], 3, [3, 4, 6, 20], 3],
     ['SEAWATERRESISTIVITY', [35, 15], 1, [5, 15, 25, 60], 3],
-    ['PROTECTIONCRITERION', ['CSE', 'standard'], 1, ['standard', 'polarisation', 'anaerobic'], 2],
+    ['PROTECTIONCRITERION', ['CSE', 'standard'], 1, ['standard', 'polarisation', 'anaerobic', 'hightemperature'], 3],
     ['MASSLOSSRATE', [0.65, 28.5, 168, 7.85, 'mm/y'], 4, ['mm/y', 'um/y', 'mpy', 'furlong/fortnight'], 3],
     ['PITTINGFACTOR', [500, 50], 1, [25, 50, 500, 0], 3],
     ['STERNGEARYB', [0.026, 1000], 1, [100, 1000, 1e5, 0.026], 3],

@@ -48,18 +48,43 @@ describe('protectionCriterion: criteria as the standards state them, per electro
     expect(() => protectionCriterion('Ag/AgCl/seawater', 'limit')).toThrow(NotFoundError);
     expect(() => protectionCriterion('Ag/AgCl/seawater', 'most negative')).toThrow(/ISO 15589-2 §5\.2.*DNV-RP-B401/);
   });
+  it('saturated calomel: −0.78 V as 49 CFR 192 Appendix D §IV.A states it, not −0.85 V CSE converted', () => {
+    // 49 CFR 192 App. D §IV.A (Amdt. 192-4, 1971), read in MIL-HDBK-1004/10 App. E (ufgscriteria.tpub.com/3_570_02/3_570_020307.htm):
+    // "Saturated KCl calomel half cell: -0.78 volt", the voltage equivalent to -0.85 volt CSE
+    const r = protectionCriterion('SCE', 'standard');
+    expect(r.value).toBe(-0.78);
+    expect(r.clause).toMatch(/49 CFR Part 192 Appendix D §IV\.A/);
+    // Pipeline Rules of Thumb Handbook p. 219 (Peabody 1973) gives the same equivalence unrounded, −0.776 V
+    expect(Math.abs(r.value - -0.776)).toBeLessThanOrEqual(0.005);
+    // the same rule lists −0.80 V for silver-silver chloride in sea water, the row the offshore standards state
+    expect(protectionCriterion('Ag/AgCl/seawater', 'standard').source).toMatch(/sea water: -0\.80 volt/);
+  });
+  it('anaerobic soil with sulfate-reducing bacteria: −0.95 V CSE (ISO 15589-1 as quoted), 100 mV beyond −0.85 V', () => {
+    // World Pipelines Aug 2015 p. 118: ISO "polarised potential criterion of -950 mV (additional 100 mV of polarisation) in the
+    // presence of active MIC"; KFUPM course notes §5.6 item 3: "-0.95 volts with respect to a Cu-CuSO4 electrode … sulphate reducing bacteria"
+    const r = protectionCriterion('CSE', 'SRB');
+    expect(r.value).toBe(-0.95);
+    expect(r.kind).toBe('potential');
+    expect(r.value).toBeCloseTo(protectionCriterion('CSE', 'standard').value - 0.1, 12);
+    expect(r.clause).toMatch(/ISO 15589-1/);
+    // not converted to the seawater electrodes: the offshore standards' sediment criterion was not read
+    for (const el of ['Ag/AgCl/seawater', 'Zn/seawater']) {
+      expect(() => protectionCriterion(el, 'anaerobic'), el).toThrow(NotFoundError);
+      expect(() => protectionCriterion(el, 'anaerobic'), el).toThrow(/DNV-RP-B401 Sec\. 5 and ISO 15589-2/);
+    }
+    expect(() => protectionCriterion('SCE', 'anaerobic')).toThrow(/do not convert/);
+  });
   it('conditions whose value was not read, and other electrodes, answer not-found with where to look', () => {
-    expect(() => protectionCriterion('CSE', 'SRB')).toThrow(/sulfate-reducing/);
     expect(() => protectionCriterion('CSE', 'high temperature')).toThrow(NotFoundError);
     expect(() => protectionCriterion('CSE', 'highstrength')).toThrow(/550 MPa/);
-    expect(() => protectionCriterion('SCE', 'standard')).toThrow(/do not convert/);
+    expect(() => protectionCriterion('SHE', 'standard')).toThrow(/do not convert/);
     expect(() => protectionCriterion('CSE', 'wet')).toThrow(InputError);
   });
   it('the #N/A messages name the standards and fit an Excel error message whole (300 characters)', () => {
-    for (const c of ['limit', 'anaerobic', 'hightemperature', 'highstrength']) {
+    for (const [el, c] of [['CSE', 'limit'], ['Ag/AgCl/seawater', 'anaerobic'], ['CSE', 'hightemperature'], ['CSE', 'highstrength']]) {
       let m = '';
       try {
-        protectionCriterion('CSE', c);
+        protectionCriterion(el, c);
       } catch (e) {
         m = (e as Error).message;
       }
