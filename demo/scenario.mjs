@@ -378,6 +378,8 @@ export const scenario = {
         { label: 'Reversible voltage at 80 °C, 30 bar, lye water activity 0.7', formula: '=CELLWRIGHT.WATERSPLITVOLTAGE(80,30,0.7)', unit: 'V', digits: 4, note: 'water activity of the lye: an invented figure for the demo' },
         { label: 'For comparison: zinc electrowinning decomposition voltage, 38 °C', formula: '=CELLWRIGHT.ELECTROWINVOLTAGE("Zn",38,0.3,0.5,0.21,0.9)', unit: 'V', digits: 4, note: 'invented tankhouse activities' },
         { label: 'For comparison: zinc electrowinning thermoneutral voltage, 38 °C', formula: '=CELLWRIGHT.ELECTROWINTHERMONEUTRAL("Zn",38)', unit: 'V', digits: 4 },
+        { label: 'For comparison: γ± of zinc sulfate alone at 1 mol/kg (I = 4), 25 °C (Pitzer, May et al. 2011)', formula: '=CELLWRIGHT.SALTACTIVITYCOEF("ZnSO4",1)', digits: 4, note: 'Davies stops at I = 0.5; the acid of a real liquor changes this figure' },
+        { label: 'For comparison: conductivity of 180 g/L sulfuric acid, 25 °C (Gu et al. 1997)', formula: '=CELLWRIGHT.CONDUCTIVITY("H2SO4",180/CELLWRIGHT.MOLARMASS("H2SO4"))', unit: 'S/m', digits: 1, note: 'the fit holds at 25 °C only: measure the liquor at bath temperature' },
 
 
         { section: 'Stack operation (test run 7, invented log)' },

@@ -5,11 +5,11 @@
 import * as F from '../families/electrolysis';
 
 /**
- * Specific conductivity of an electrolyte from a published correlation, in S/m. KOH: Gilliam et al., Int. J. Hydrogen Energy 32 (2007) 359, 0–12 mol/L and 0–100 °C; outside its range the answer is #VALUE! with the range (never an extrapolation). Other electrolytes (NaOH, H2SO4, copper or zinc sulfate liquors) have no built-in correlation yet and answer #N/A: enter a measured conductivity in OHMICDROP or CELLVOLTAGE.
+ * Specific conductivity of an electrolyte from a published correlation, in S/m. KOH: Gilliam et al., Int. J. Hydrogen Energy 32 (2007) 359, 0–12 mol/L and 0–100 °C. H2SO4: Gu, Wang & Liaw, J. Electrochem. Soc. 144 (1997) 2053, 1–6 mol/L at 25 °C only (a battery-model fit with no temperature term). Outside a range the answer is #VALUE! with the range (never an extrapolation). Other electrolytes (NaOH, copper, zinc or nickel sulfate liquors) have no built-in correlation yet and answer #N/A: enter a measured conductivity in OHMICDROP or CELLVOLTAGE.
  * @customfunction CONDUCTIVITY
  * @helpurl https://localhost:3000/docs/functions.html#conductivity
- * @param electrolyte Electrolyte name: "KOH".
- * @param concentration_mol_L Concentration in mol per litre of solution (30 wt % KOH is about 6.9 mol/L at 25 °C).
+ * @param electrolyte Electrolyte name: "KOH" or "H2SO4".
+ * @param concentration_mol_L Concentration in mol per litre of solution (30 wt % KOH is about 6.9 mol/L at 25 °C; 180 g/L H2SO4 is 1.84 mol/L).
  * @param [temperature_C] Temperature in °C (default 25).
  * @returns Conductivity in S/m (1 S/cm = 100 S/m).
  */

@@ -46,3 +46,16 @@ function activitycoef(charge: any[][], ionic_strength: any[][], model?: any[][],
 function meanactivitycoef(z_cation: any[][], z_anion: any[][], ionic_strength: any[][], model?: any[][], temperature_C?: any[][], ion_size_A?: any[][]): any[][] {
   return F.MEANACTIVITYCOEF(z_cation, z_anion, ionic_strength, model, temperature_C, ion_size_A) as any;
 }
+
+/**
+ * Mean ionic activity coefficient γ± of a salt alone in water at 25 °C, by the Pitzer equation with the parameters of May et al., J. Chem. Eng. Data 56 (2011) 5066: reaches concentrated baths and liquors (ZnSO4 to 3.5 mol/kg, I = 14) where "DAVIES" stops at I = 0.5. Salts: CuSO4, ZnSO4, NiSO4, MnSO4, CdSO4, CuCl2, NiCl2, CoCl2, ZnCl2, Na2SO4, HCl, NaCl, KCl, NaOH, KOH, each up to its own molality; beyond it, or at another temperature, the answer is #VALUE! with the range. A pure solution of that salt: with acid or other salts present the coefficient differs.
+ * @customfunction SALTACTIVITYCOEF
+ * @helpurl https://localhost:3000/docs/functions.html#saltactivitycoef
+ * @param salt Formula of the salt, such as "ZnSO4" or "NiCl2".
+ * @param molality_mol_kg Molality of the salt, in mol per kg of water (not mol/L of solution).
+ * @param [temperature_C] Temperature in °C (default 25; the parameters hold at 25 °C only).
+ * @returns Mean activity coefficient γ± on the molality scale (dimensionless).
+ */
+function saltactivitycoef(salt: any[][], molality_mol_kg: any[][], temperature_C?: any[][]): any[][] {
+  return F.SALTACTIVITYCOEF(salt, molality_mol_kg, temperature_C) as any;
+}

@@ -59,8 +59,8 @@ function withHeader(fn: WorksheetFunction, labels: readonly string[], at: number
 
 export const CONDUCTIVITY = worksheet({
   id: 'CONDUCTIVITY',
-  description: 'Specific conductivity of an electrolyte from a published correlation, in S/m. KOH: Gilliam et al., Int. J. Hydrogen Energy 32 (2007) 359, 0–12 mol/L and 0–100 °C; outside its range the answer is #VALUE! with the range (never an extrapolation). Other electrolytes (NaOH, H2SO4, copper or zinc sulfate liquors) have no built-in correlation yet and answer #N/A: enter a measured conductivity in OHMICDROP or CELLVOLTAGE.',
-  args: [{ name: 'electrolyte', kind: 'text', unit: '', help: 'Electrolyte name: "KOH".' }, { ...num('concentration_mol_L', domains.nonNegative, 'mol/L'), help: 'Concentration in mol per litre of solution (30 wt % KOH is about 6.9 mol/L at 25 °C).' }, temperatureC],
+  description: 'Specific conductivity of an electrolyte from a published correlation, in S/m. KOH: Gilliam et al., Int. J. Hydrogen Energy 32 (2007) 359, 0–12 mol/L and 0–100 °C. H2SO4: Gu, Wang & Liaw, J. Electrochem. Soc. 144 (1997) 2053, 1–6 mol/L at 25 °C only (a battery-model fit with no temperature term). Outside a range the answer is #VALUE! with the range (never an extrapolation). Other electrolytes (NaOH, copper, zinc or nickel sulfate liquors) have no built-in correlation yet and answer #N/A: enter a measured conductivity in OHMICDROP or CELLVOLTAGE.',
+  args: [{ name: 'electrolyte', kind: 'text', unit: '', help: 'Electrolyte name: "KOH" or "H2SO4".' }, { ...num('concentration_mol_L', domains.nonNegative, 'mol/L'), help: 'Concentration in mol per litre of solution (30 wt % KOH is about 6.9 mol/L at 25 °C; 180 g/L H2SO4 is 1.84 mol/L).' }, temperatureC],
   result: 'Conductivity in S/m (1 S/cm = 100 S/m).',
   helpAnchor: 'conductivity',
   compute: electrolyteConductivity,

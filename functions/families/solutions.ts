@@ -2,6 +2,7 @@
 import { activityCoef } from '../../src/solutions/activityCoef';
 import { ionicStrength } from '../../src/solutions/ionicStrength';
 import { meanActivityCoef } from '../../src/solutions/meanActivityCoef';
+import { saltActivityCoef } from '../../src/solutions/saltActivityCoef';
 import { type ArgSpec, type Domain, domains, worksheet } from '../adapter';
 import { optNum, temperatureC } from '../args';
 
@@ -51,4 +52,17 @@ export const MEANACTIVITYCOEF = worksheet({
   result: 'Mean activity coefficient (dimensionless).',
   helpAnchor: 'meanactivitycoef',
   compute: meanActivityCoef,
+});
+
+export const SALTACTIVITYCOEF = worksheet({
+  id: 'SALTACTIVITYCOEF',
+  description: 'Mean ionic activity coefficient γ± of a salt alone in water at 25 °C, by the Pitzer equation with the parameters of May et al., J. Chem. Eng. Data 56 (2011) 5066: reaches concentrated baths and liquors (ZnSO4 to 3.5 mol/kg, I = 14) where "DAVIES" stops at I = 0.5. Salts: CuSO4, ZnSO4, NiSO4, MnSO4, CdSO4, CuCl2, NiCl2, CoCl2, ZnCl2, Na2SO4, HCl, NaCl, KCl, NaOH, KOH, each up to its own molality; beyond it, or at another temperature, the answer is #VALUE! with the range. A pure solution of that salt: with acid or other salts present the coefficient differs.',
+  args: [
+    { name: 'salt', kind: 'text', unit: '', help: 'Formula of the salt, such as "ZnSO4" or "NiCl2".' },
+    { name: 'molality_mol_kg', kind: 'number', domain: domains.nonNegative, unit: 'mol/kg', help: 'Molality of the salt, in mol per kg of water (not mol/L of solution).' },
+    { ...temperatureC, help: 'Temperature in °C (default 25; the parameters hold at 25 °C only).' },
+  ],
+  result: 'Mean activity coefficient γ± on the molality scale (dimensionless).',
+  helpAnchor: 'saltactivitycoef',
+  compute: saltActivityCoef,
 });

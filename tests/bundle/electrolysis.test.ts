@@ -54,7 +54,19 @@ describe('CONDUCTIVITY, BRUGGEMAN, OHMICDROP', () => {
     expect(neg.message).toBe('concentration_mol_L must be ≥ 0; got -1');
     const naoh = one(await call('CONDUCTIVITY', 'NaOH', 2, 80)) as { code: string; message: string };
     expect(naoh.code).toBe('#N/A');
-    expect(naoh.message).toMatch(/no conductivity correlation for "NaOH"; available: KOH; .*OHMICDROP or CELLVOLTAGE/);
+    expect(naoh.message).toMatch(/no conductivity correlation for "NaOH"; available: KOH, H2SO4; .*OHMICDROP or CELLVOLTAGE/);
+  });
+  it('H2SO4 by Gu, Wang & Liaw 1997 over a row of concentrations at 25 °C; another temperature or a dilute acid is #VALUE! naming the range', async () => {
+    const r = await call('CONDUCTIVITY', 'H2SO4', [[1, 1.84, 5.65]], null);
+    // κ = c·exp(6.23 − 1.34e-4·c − 1.61e-8·c²)·1e-4 S/m, c in mol/m³ (Gu et al. 1997)
+    const gu = (c: number) => c * 1000 * Math.exp(6.23 - 1.34e-4 * c * 1000 - 1.61e-8 * (c * 1000) ** 2) * 1e-4;
+    expect(r[0].map((x) => Number((x as number).toFixed(9)))).toEqual([1, 1.84, 5.65].map((c) => Number(gu(c).toFixed(9))));
+    const hot = one(await call('CONDUCTIVITY', 'H2SO4', 1.84, 50)) as { code: string; message: string };
+    expect(hot.code).toBe('#VALUE!');
+    expect(hot.message).toBe('temperature 50 °C: the H2SO4 correlation (Gu, Wang & Liaw 1997) has no temperature term and holds at 25 °C only');
+    const dilute = one(await call('CONDUCTIVITY', 'h2so4', 0.5, 25)) as { code: string; message: string };
+    expect(dilute.code).toBe('#VALUE!');
+    expect(dilute.message).toMatch(/^H2SO4 concentration 0\.5 mol\/L is outside the correlation's range 1–6 mol\/L/);
   });
   it('BRUGGEMAN and OHMICDROP with a gas fraction', async () => {
     expect(one(await call('BRUGGEMAN', 100, 0.2))).toBeCloseTo(71.554, 3); // 100 × 0.8^1.5
