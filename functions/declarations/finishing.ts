@@ -67,7 +67,7 @@ function h2ventilation(current_A: any[][], efficiency: any[][], lfl_fraction: an
 }
 
 /**
- * A coating and its substrate in the practical galvanic series in flowing seawater (GALVANICSERIES), a row of 2: E(coating) − E(substrate) between the midpoints of their ranges, in V, and the name of the anodic one (the more negative range, which corrodes at pores and cut edges), or a note that the ranges overlap. No verdict: what difference is acceptable depends on the environment and the design standard that applies.
+ * A coating and its substrate in the practical galvanic series in flowing seawater (GALVANICSERIES), a row of 2: E(coating) − E(substrate) between the midpoints of their ranges, in V, and the name of the anodic one (the more negative range, which corrodes at pores and cut edges), or a note that the ranges overlap. The farther apart in the series, the stronger the galvanic effect (MIL-STD-889B, Notice 1, 5.1.2); no verdict here: what difference is acceptable depends on the environment, the area ratio and the design standard that applies.
  * @customfunction GALVANICPAIR
  * @helpurl https://localhost:3000/docs/functions.html#galvanicpair
  * @param coating Coating (deposit) as named in the series, e.g. "Zinc", "Nickel 200", "Tin".

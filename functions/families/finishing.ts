@@ -99,7 +99,7 @@ export const H2VENTILATION = worksheet({
 export const GALVANICPAIR = worksheet({
   id: 'GALVANICPAIR',
   description:
-    'A coating and its substrate in the practical galvanic series in flowing seawater (GALVANICSERIES), a row of 2: E(coating) − E(substrate) between the midpoints of their ranges, in V, and the name of the anodic one (the more negative range, which corrodes at pores and cut edges), or a note that the ranges overlap. No verdict: what difference is acceptable depends on the environment and the design standard that applies.',
+    'A coating and its substrate in the practical galvanic series in flowing seawater (GALVANICSERIES), a row of 2: E(coating) − E(substrate) between the midpoints of their ranges, in V, and the name of the anodic one (the more negative range, which corrodes at pores and cut edges), or a note that the ranges overlap. The farther apart in the series, the stronger the galvanic effect (MIL-STD-889B, Notice 1, 5.1.2); no verdict here: what difference is acceptable depends on the environment, the area ratio and the design standard that applies.',
   args: [
     { name: 'coating', kind: 'text', unit: '', help: 'Coating (deposit) as named in the series, e.g. "Zinc", "Nickel 200", "Tin".' },
     { name: 'substrate', kind: 'text', unit: '', help: 'Substrate as named in the series, e.g. "Mild steel, cast iron", "Copper".' },

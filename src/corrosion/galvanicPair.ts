@@ -5,7 +5,10 @@ import { galvanicSeries } from './galvanicSeries';
  * seawater (galvanicSeries, V vs SCE): the difference of the midpoints of their corrosion-potential
  * ranges, E(coating) − E(substrate), and the one that is anodic (the more negative range, which
  * corrodes at a pore or a cut edge). When the two ranges overlap, neither is reliably anodic and the
- * answer says so. No verdict on compatibility: the series is for seawater, the difference at a pore
+ * answer says so. The farther apart two metals are in a galvanic series, the stronger their galvanic
+ * effect (MIL-STD-889B, Dissimilar metals, Notice 1 (1979), 5.1.2, read in the scribd copy
+ * scribd.com/document/372446683), but that standard's compatibility table was not read here, so no
+ * verdict on compatibility: the series is for seawater, the difference at a pore
  * depends on the electrolyte, aeration, area ratio and temperature, and limits belong to the
  * design standard that applies.
  *

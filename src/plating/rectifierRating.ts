@@ -32,6 +32,6 @@ export function rectifierRating(
   voltageMargin: number,
 ): [number, number, number] {
   const current = finite(areaDm2 * currentDensityA_dm2 * (1 + currentMargin), 'the current');
-  const voltage = (tankV + dropV) * (1 + voltageMargin);
+  const voltage = finite((tankV + dropV) * (1 + voltageMargin), 'the voltage');
   return [current, voltage, finite((current * voltage) / 1000, 'the power')];
 }

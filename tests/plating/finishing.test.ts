@@ -26,6 +26,12 @@ describe('freeCyanide: Liebig titration, 2 CN⁻ + Ag⁺ → Ag(CN)₂⁻', () =
     expect(freeCyanide(1, 0.1, 1000, 'NaCN') * 1000).toBeCloseTo(9.8016, 4);
     expect(freeCyanide(1, 0.1, 1000, 'KCN') * 1000).toBeCloseTo(2 * 0.1 * (AW.K + AW.C + AW.N), 4); // 13.023 mg
   });
+  it('the 2 CN⁻ per Ag⁺ factor against a published titration factor: 1 mL 0.02 N AgNO3 = 1.08 mg HCN', () => {
+    // AOAC alkaline titration method for HCN, text read at th4.ilovetranslation.com/57bw4vKfIxu=d: "1 mL 0.02 N
+    // AgNO3 = 1.08 mg HCN (Ag equivalent to 2 CN)". The same cyanide expressed as HCN (27.025 g/mol) instead of NaCN.
+    const mgNaCN = freeCyanide(1, 0.02, 1000, 'NaCN') * 1000; // mg in the sample: g/L × 1 L
+    expect((mgNaCN * (1.008 + AW.C + AW.N)) / (AW.Na + AW.C + AW.N)).toBeCloseTo(1.08, 2);
+  });
   it('KCN and NaCN results differ by the ratio of their molar masses', () => {
     expect(freeCyanide(8, 0.05, 5, 'kcn') / freeCyanide(8, 0.05, 5, 'nacn')).toBeCloseTo((AW.K + AW.C + AW.N) / (AW.Na + AW.C + AW.N), 12);
   });
