@@ -22,7 +22,7 @@ function freecyanide(titrant_mL: any[][], titrant_mol_L: any[][], sample_mL: any
  * Cathode current efficiency from thickness readings: their mean (blank cells skipped) over the thickness Faraday's law gives at 100 % for the same current density, time, metal and density. Above 1 means readings to question (gauge, density, readings where the current density is above the average). Take the readings where the average current density applies, not on edges or in recesses.
  * @customfunction THICKNESSEFFICIENCY
  * @helpurl https://localhost:3000/docs/functions.html#thicknessefficiency
- * @param readings_um Thickness readings, in µm, a range (blank cells skipped).
+ * @param readings_um Thickness readings, in µm, each > 0, a range (blank cells skipped; a 0 is refused, since an empty cell can arrive as 0).
  * @param current_density_A_dm2 Average current density, in A/dm².
  * @param time_min Plating time, in min (an Excel time value is a fraction of a day: multiply it by 1440).
  * @param species Deposited metal ("Ni", "Cu") or its molar mass in g/mol.

@@ -19,6 +19,8 @@ const margin = bounded({ lo: 0, loIncl: true, hi: 1, hiIncl: true }, 'a fraction
 const lflShare = bounded({ lo: 0, hi: 1, hiIncl: true }, 'a fraction in (0, 1] (0.25 for 25 % of the LFL)');
 /** A lower flammability limit in vol %. */
 const lflPercent = bounded({ lo: 0, hi: 100 }, 'between 0 and 100 vol %');
+/** A thickness reading: > 0, so that an empty cell passed as 0 is not averaged in as a reading. */
+const readingDomain = bounded({ lo: 0 }, '> 0 (remove empty cells or zeros from the readings)');
 /** A metal ("Ni") or its molar mass in g/mol. */
 const species: ArgSpec = { name: 'species', kind: 'species', domain: domains.positive, unit: 'g/mol', help: 'Deposited metal ("Ni", "Cu") or its molar mass in g/mol.' };
 
@@ -42,7 +44,7 @@ export const THICKNESSEFFICIENCY = worksheet({
   description:
     'Cathode current efficiency from thickness readings: their mean (blank cells skipped) over the thickness Faraday\'s law gives at 100 % for the same current density, time, metal and density. Above 1 means readings to question (gauge, density, readings where the current density is above the average). Take the readings where the average current density applies, not on edges or in recesses.',
   args: [
-    { name: 'readings_um', kind: 'numberList', domain: domains.nonNegative, unit: 'µm', help: 'Thickness readings, in µm, a range (blank cells skipped).' },
+    { name: 'readings_um', kind: 'numberList', domain: readingDomain, unit: 'µm', help: 'Thickness readings, in µm, each > 0, a range (blank cells skipped; a 0 is refused, since an empty cell can arrive as 0).' },
     { ...num('current_density_A_dm2', domains.positive, 'A/dm²'), help: 'Average current density, in A/dm².' },
     { ...num('time_min', domains.positive, 'min'), help: 'Plating time, in min (an Excel time value is a fraction of a day: multiply it by 1440).' },
     species,

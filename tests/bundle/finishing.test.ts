@@ -34,6 +34,9 @@ describe('THICKNESSEFFICIENCY', () => {
     expect(r[0][0]).toBeCloseTo(2 * r[0][1], 12);
     expect(isError(one(await run('THICKNESSEFFICIENCY', [['twelve']], 1, 60, 'Ni', 2, 8.908)), '#VALUE!')).toBe(true);
     expect(isError(one(await run('THICKNESSEFFICIENCY', [[12]], 1, 60, 'NI', 2, 8.908)), '#VALUE!')).toBe(true); // did you mean Ni?
+    const zero = one(await run('THICKNESSEFFICIENCY', [[12], [0]], 1, 60, 'Ni', 2, 8.908));
+    expect(isError(zero, '#VALUE!')).toBe(true); // a 0 is not averaged in: an empty cell may arrive as 0
+    expect(msg(zero)).toMatch(/readings_um must be > 0/);
   });
 });
 
