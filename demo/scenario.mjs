@@ -142,6 +142,36 @@ export const scenario = {
         { key: 'crT', label: 'Bath temperature today', value: 53, unit: '°C' },
         { key: 'crE', label: 'Efficiency at that temperature', formula: '=CELLWRIGHT.EFFICIENCYCURVE({crT},{crEff.t},{crEff.e})', unit: 'fraction', digits: 3, note: 'interpolated in the supplier\'s curve; outside 45–60 °C the function refuses' },
         { label: 'Time to 50 µm of chromium at 40 A/dm²', formula: '=CELLWRIGHT.PLATETIME(50,40,"Cr",6,7.19,{crE})', unit: 'min', digits: 0, note: 'Cr(VI) → Cr: n = 6; chromium(VI) is toxic and carcinogenic' },
+
+        { section: 'Shop checks: cyanide strike, thickness readings, rectifier, ventilation, coatings' },
+        { key: 'cnMl', label: 'Silver nitrate to the first turbidity (10 mL of the cyanide copper strike, KI indicator)', value: 12.4, unit: 'mL' },
+        { key: 'agM', label: 'Silver nitrate molarity', value: 0.1, unit: 'mol/L' },
+        { label: 'Free sodium cyanide of the strike', formula: '=CELLWRIGHT.FREECYANIDE({cnMl},{agM},10,"NaCN")', unit: 'g/L', digits: 2, note: 'cyanide: sample under extraction and never near acid (hydrogen cyanide)' },
+        { table: 'niRead', caption: 'Order 24-118: bracket thickness readings after a 40 min program at the line current density (invented)', columns: [
+          { key: 'h', header: 'Reading', unit: 'µm', values: [30.8, 31.6, 31.1, 30.5, 31.9] },
+        ] },
+        { label: 'Cathode efficiency from the thickness readings', formula: '=CELLWRIGHT.THICKNESSEFFICIENCY({niRead.h},{niCd},40,"Ni",{niN},{niRho})', unit: 'fraction', digits: 3, note: 'agrees with the weighed panels; readings on flat faces only' },
+        { table: 'rect', caption: 'Rectifier for the nickel line: 0.4 V in bus bars and leads, design margins 20 % on current and 10 % on voltage (the shop\'s choice)', columns: [
+          { key: 'area', header: 'Largest load', unit: 'dm²', values: [120, 160] },
+          { header: 'Current', unit: 'A', formula: '=CELLWRIGHT.RECTIFIERSIZE({rect.area},{niCd},{niV},0.4,0.2,0.1)', digits: 1 },
+          { header: 'Voltage', unit: 'V', spill: true },
+          { header: 'Power', unit: 'kW', spill: true },
+        ] },
+        { table: 'vent', caption: 'Hydrogen from the cathodes and the exhaust air that keeps it at 25 % of the lower flammability limit (0 °C reference)', columns: [
+          { key: 'tank', header: 'Tank', values: ['Bright nickel', 'Zinc–nickel barrels'] },
+          { key: 'I', header: 'Current', unit: 'A', values: [2000, 400] },
+          { key: 'eff', header: 'Cathode efficiency', unit: 'fraction', values: [0.955, 0.55] },
+          { header: 'Hydrogen', unit: 'Nm³/h', formula: '=CELLWRIGHT.H2VENTILATION({vent.I},{vent.eff},0.25)', digits: 4 },
+          { header: 'Air, at least', unit: 'Nm³/h', spill: true },
+        ] },
+        { text: 'A screening figure (perfect mixing): the exhaust design follows the ventilation and explosion-protection codes.' },
+        { table: 'gp', caption: 'Coatings on steel in the galvanic series (flowing seawater, V vs SCE)', columns: [
+          { key: 'c', header: 'Coating', values: ['Zinc', 'Nickel 200', 'Tin'] },
+          { header: 'E(coating) − E(steel)', unit: 'V', formula: '=CELLWRIGHT.GALVANICPAIR({gp.c},"Mild steel, cast iron")', digits: 3 },
+          { header: 'Anodic member', spill: true },
+        ] },
+        { label: 'Life of the 8 µm zinc–nickel at 0.3 µA/cm² (invented exposure figure)', formula: '=CELLWRIGHT.COATINGLIFE({znniT},0.3,"uA/cm2",{znniEw},1,{znniRhoMix})', unit: 'years', digits: 1, note: 'uniform attack only; the alloy\'s equivalent weight with n = 1' },
+        { label: 'Life of 12 µm zinc at 1.5 µm/y (invented exposure figure)', formula: '=CELLWRIGHT.COATINGLIFE(12,1.5,"um/y")', unit: 'years', digits: 1 },
       ],
     },
 

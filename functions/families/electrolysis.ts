@@ -37,14 +37,14 @@ const drop = (name: string): ArgSpec => optNum(name, 0, domains.nonNegative, 'V'
 const header: ArgSpec = { name: 'header', kind: 'boolean', optional: true, default: false, unit: '' };
 
 /** True for a header argument that asks for the header row (TRUE, 1 or "TRUE", alone or as a 1×1 range). */
-function wantsHeader(raw: unknown): boolean {
+export function wantsHeader(raw: unknown): boolean {
   let v = raw;
   if (Array.isArray(v) && v.length === 1 && Array.isArray(v[0]) && v[0].length === 1) v = v[0][0];
   return v === true || v === 1 || (typeof v === 'string' && v.trim().toUpperCase() === 'TRUE');
 }
 
 /** A row-result function whose last argument `header` = TRUE puts a row of labels on top. */
-function withHeader(fn: WorksheetFunction, labels: readonly string[], at: number): WorksheetFunction {
+export function withHeader(fn: WorksheetFunction, labels: readonly string[], at: number): WorksheetFunction {
   const add = (r: Cell[][]): Cell[][] => (r.every((row) => row.length === labels.length) ? [labels.slice(), ...r] : r);
   return (...raws: unknown[]): WorksheetResult => {
     const h = raws[at];
