@@ -29,7 +29,7 @@ export const ACIDPERTONNE = worksheet({
   description:
     'Net sulfuric acid formed per tonne of metal electrowon from a sulfate liquor with oxygen-evolving anodes, in t H2SO4 per t of metal. Model: the sulfate balance of the overall reaction MSO4 + H2O → M + H2SO4 + ½O2, n/2 mol H2SO4 per mol of metal harvested (zinc 1.50 t/t, copper 1.54 t/t). The cathode efficiency does not change it when the lost charge goes to hydrogen, to redissolved metal or to an iron couple cycling between the electrodes (the acid they consume cancels the extra acid the anode makes); it enters only with MnO2 formed at the anode from Mn2+ (1 mol H2SO4 per mol MnO2): (n/2)·(1 + f/ε). Ferric iron fed in and leaving as ferrous adds acid not counted here.',
   args: [
-    { ...species, help: 'Metal deposited, "Zn", "Cu", "Ni", "Co" or "Mn", or its molar mass in g/mol.' },
+    { ...species, name: 'metal', help: 'Metal deposited, "Zn", "Cu", "Ni", "Co" or "Mn", or its molar mass in g/mol.' },
     { ...electrons, help: 'Charge of the metal ion, electrons per atom deposited (2 for Zn2+, Cu2+, Ni2+).' },
     { ...optNum('cathode_efficiency', 1, domains.efficiency), help: 'Cathode current efficiency as a fraction, 0 to 1 (default 1); it matters only with mno2_fraction.' },
     { ...optNum('mno2_fraction', 0, fractionBelowOne), help: 'Fraction of the cell current that forms MnO2 at the anode from Mn2+, in [0, 1) (default 0); MnO2 per day is DEPOSITMASS(current, 24, "MnO2", 2, this fraction).' },
