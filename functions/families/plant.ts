@@ -7,7 +7,7 @@ import { acidPerTonne } from '../../src/plant/acidPerTonne';
 import { gasCrossover } from '../../src/plant/gasCrossover';
 import { powerCost } from '../../src/plant/powerCost';
 import { waterPerHydrogen } from '../../src/plant/waterPerHydrogen';
-import { type ArgSpec, type WorksheetFunction, type WorksheetResult, bounded, domains, invalidValue, worksheet } from '../adapter';
+import { type ArgSpec, type WorksheetFunction, type WorksheetResult, bounded, domains, invalidValue, isErrorValue, worksheet } from '../adapter';
 import { electrons, num, optNum } from '../args';
 
 /** A formula text ("Zn") or a molar mass in g/mol. */
@@ -60,8 +60,8 @@ const cellsOf = (raw: unknown): unknown[] => (Array.isArray(raw) ? (raw as unkno
 
 /**
  * The log's two ranges are read pair by pair: a reading with no voltage or no hours is left out
- * with its partner (a logger that missed a reading), and ranges of different sizes are refused
- * (their cells could not be paired).
+ * with its partner (a logger that missed a reading), unless the partner is an error value, which
+ * is passed on; ranges of different sizes are refused (their cells could not be paired).
  */
 function pairedLog(fn: WorksheetFunction): WorksheetFunction {
   return (...raws: unknown[]): WorksheetResult => {
@@ -73,7 +73,16 @@ function pairedLog(fn: WorksheetFunction): WorksheetFunction {
     const uKept: unknown[][] = [];
     const tKept: unknown[][] = [];
     for (let i = 0; i < u.length; i++) {
-      if (blank(u[i]) || blank(t[i])) continue;
+      const bu = blank(u[i]);
+      const bt = blank(t[i]);
+      if (bu || bt) {
+        // an error value beside an empty cell is passed on (as both of the pair), not dropped
+        const err = bu ? t[i] : u[i];
+        if (!isErrorValue(err)) continue;
+        uKept.push([err]);
+        tKept.push([err]);
+        continue;
+      }
       uKept.push([u[i]]);
       tKept.push([t[i]]);
     }

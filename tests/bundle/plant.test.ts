@@ -4,7 +4,7 @@
  * overpotentials of the kinetics family, on scalars, ranges, omitted arguments and error cells.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { type LoadedBundle, isError, loadBundle, one } from './harness';
+import { FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
 
 let b: LoadedBundle;
 beforeAll(() => {
@@ -68,6 +68,9 @@ describe('DEGRADATIONRATE', () => {
     expect(msg(few[0][0])).toMatch(/at least 10/);
     const txt = one(await call('DEGRADATIONRATE', [[1.8], ['n/a'], [1.82]], [[0], [1], [2]], null));
     expect(isError(txt, '#VALUE!')).toBe(true);
+    // an error reading beside an empty hours cell is passed on, not dropped with its partner
+    const na = one(await call('DEGRADATIONRATE', [[1.8], [new FakeError('#N/A')], [1.82], [1.83]], [[0], [null], [2], [3]], null));
+    expect(isError(na, '#N/A')).toBe(true);
     const two = await call('DEGRADATIONRATE', volts, hours, 2);
     expect(isError(two[0][0], '#VALUE!')).toBe(true);
     expect(msg(two[0][0])).toMatch(/min_points must be a whole number ≥ 3/);
