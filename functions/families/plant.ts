@@ -7,7 +7,7 @@ import { acidPerTonne } from '../../src/plant/acidPerTonne';
 import { gasCrossover } from '../../src/plant/gasCrossover';
 import { powerCost } from '../../src/plant/powerCost';
 import { waterPerHydrogen } from '../../src/plant/waterPerHydrogen';
-import { type ArgSpec, type WorksheetFunction, type WorksheetResult, bounded, domains, invalidValue, isErrorValue, worksheet } from '../adapter';
+import { type ArgSpec, type Cell, type WorksheetFunction, type WorksheetResult, bounded, domains, invalidValue, isErrorValue, worksheet } from '../adapter';
 import { electrons, num, optNum } from '../args';
 
 /** A formula text ("Zn") or a molar mass in g/mol. */
@@ -61,14 +61,17 @@ const cellsOf = (raw: unknown): unknown[] => (Array.isArray(raw) ? (raw as unkno
 /**
  * The log's two ranges are read pair by pair: a reading with no voltage or no hours is left out
  * with its partner (a logger that missed a reading), unless the partner is an error value, which
- * is passed on; ranges of different sizes are refused (their cells could not be paired).
+ * is passed on; ranges of different sizes are refused (their cells could not be paired). An error
+ * for the whole call fills the result row, as the error of one element does.
  */
-function pairedLog(fn: WorksheetFunction): WorksheetFunction {
+function pairedLog(fn: WorksheetFunction, width: number): WorksheetFunction {
+  // an error for the whole call fills the row, as an error of one element does
+  const widen = (r: Cell[][]): Cell[][] => (r.length === 1 && r[0].length === 1 && isErrorValue(r[0][0]) ? [new Array<Cell>(width).fill(r[0][0])] : r);
   return (...raws: unknown[]): WorksheetResult => {
     const u = cellsOf(raws[0]);
     const t = cellsOf(raws[1]);
     if (u.length !== t.length) {
-      return [[invalidValue(`voltages_V and hours_h must be ranges of the same size, one hours value per voltage; got ${u.length} and ${t.length} cells`)]];
+      return widen([[invalidValue(`voltages_V and hours_h must be ranges of the same size, one hours value per voltage; got ${u.length} and ${t.length} cells`)]]);
     }
     const uKept: unknown[][] = [];
     const tKept: unknown[][] = [];
@@ -86,9 +89,13 @@ function pairedLog(fn: WorksheetFunction): WorksheetFunction {
       uKept.push([u[i]]);
       tKept.push([t[i]]);
     }
-    return fn(uKept.length > 0 ? uKept : null, tKept.length > 0 ? tKept : null, ...raws.slice(2));
+    const r = fn(uKept.length > 0 ? uKept : null, tKept.length > 0 ? tKept : null, ...raws.slice(2));
+    return r instanceof Promise ? r.then(widen) : widen(r);
   };
 }
+
+/** Rate, its standard error, readings. */
+const DEGRADATION_COLUMNS = 3;
 
 export const DEGRADATIONRATE = pairedLog(
   worksheet({
@@ -103,8 +110,9 @@ export const DEGRADATIONRATE = pairedLog(
     result: 'A row: degradation rate in µV/h, its standard error in µV/h, and the number of readings used.',
     helpAnchor: 'degradationrate',
     compute: degradationRate,
-    rowResult: 3,
+    rowResult: DEGRADATION_COLUMNS,
   }),
+  DEGRADATION_COLUMNS,
 );
 
 export const GASCROSSOVER = worksheet({

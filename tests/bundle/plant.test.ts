@@ -60,16 +60,18 @@ describe('DEGRADATIONRATE', () => {
     expect(r[0][2]).toBe(3);
   });
   it('ranges of different sizes, too few points and a text reading are #VALUE! with a message', async () => {
-    const m = one(await call('DEGRADATIONRATE', volts, hours.slice(0, 4), null));
+    const mm = await call('DEGRADATIONRATE', volts, hours.slice(0, 4), null);
+    expect(mm[0]).toHaveLength(3); // an error for the whole call fills the row
+    const m = mm[0][0];
     expect(isError(m, '#VALUE!')).toBe(true);
     expect(msg(m)).toMatch(/same size.*got 5 and 4 cells/);
     const few = await call('DEGRADATIONRATE', volts, hours, 10);
     expect(isError(few[0][0], '#VALUE!')).toBe(true);
     expect(msg(few[0][0])).toMatch(/at least 10/);
-    const txt = one(await call('DEGRADATIONRATE', [[1.8], ['n/a'], [1.82]], [[0], [1], [2]], null));
+    const txt = (await call('DEGRADATIONRATE', [[1.8], ['n/a'], [1.82]], [[0], [1], [2]], null))[0][2];
     expect(isError(txt, '#VALUE!')).toBe(true);
     // an error reading beside an empty hours cell is passed on, not dropped with its partner
-    const na = one(await call('DEGRADATIONRATE', [[1.8], [new FakeError('#N/A')], [1.82], [1.83]], [[0], [null], [2], [3]], null));
+    const na = (await call('DEGRADATIONRATE', [[1.8], [new FakeError('#N/A')], [1.82], [1.83]], [[0], [null], [2], [3]], null))[0][0];
     expect(isError(na, '#N/A')).toBe(true);
     const two = await call('DEGRADATIONRATE', volts, hours, 2);
     expect(isError(two[0][0], '#VALUE!')).toBe(true);
