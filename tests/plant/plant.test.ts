@@ -65,6 +65,9 @@ describe('water per unit of hydrogen', () => {
 });
 
 describe('degradation rate from a voltage log', () => {
+  // The rate as the least-squares slope of voltage against operating hours, in µV/h: common practice
+  // (a published protocol's definition, such as the EU harmonised test protocols for water
+  // electrolysis, could not be read while this was written).
   // NIST Statistical Reference Datasets, linear least squares, "Norris" (lower difficulty):
   // https://www.itl.nist.gov/div898/strd/lls/data/Norris.shtml; certified B1 = 1.00211681802045,
   // s(B1) = 0.429796848199937E-03 (data and certified values read in public test files that copy the set)
