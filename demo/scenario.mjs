@@ -13,6 +13,7 @@ export const scenario = {
     'The same engineer treats the rinse waters (copper recovery by cementation, chromium(VI) reduction) and keeps the bath chemistry in a QA-checked template: potentials at real concentrations and pH, with activity corrections.',
     'A consulting colleague reviews the close-interval survey of the Lintravel trunk main, an invented buried steel water main under cathodic protection, surveyed with a portable Cu/CuSO4 electrode and, at the estuary crossing, with a silver/silver chloride seawater electrode; each reading is compared with the criterion the standards state for the electrode it was taken with, ON and instant-OFF readings side by side.',
     'A third sheet sizes the Tessivar PS-2 pilot stack, an invented alkaline water electrolyser: reversible and thermoneutral voltages against temperature, hydrogen and oxygen output, and energy per kilogram of hydrogen.',
+    'A fourth sheet runs the Quillbray zinc tankhouse, an invented electrowinning plant: zinc per day, acid returned to the leach, the manganese dioxide side reaction at the anodes, the cathode overpotential near the limiting current, and DC and AC energy and power cost per tonne.',
     'The last sheet is a what-if table: the copper half-cell potential over concentration and temperature, from one spilled formula.',
   ],
   howToUse: [
@@ -484,6 +485,77 @@ export const scenario = {
         { label: 'Tafel slope at the lye temperature', formula: '=CELLWRIGHT.TAFELSLOPE({aa},{T})', unit: 'V/decade', digits: 4 },
         { key: 'etaA', label: 'Anode overpotential at the operating current density', formula: '=CELLWRIGHT.OVERPOTENTIAL({i},{i0},{aa},{ac},{T})', unit: 'V', digits: 4 },
         { label: 'Check: Butler–Volmer current density at that overpotential', formula: '=CELLWRIGHT.BUTLERVOLMER({i0},{etaA},{aa},{ac},{T})', unit: 'A/cm²', digits: 4 },
+
+        { section: 'Water, gas purity, ageing and power cost (test run 7, invented figures)' },
+        { label: 'Stoichiometric water per kg of hydrogen', formula: '=CELLWRIGHT.WATERPERH2("kg")', unit: 'kg/kg', digits: 3 },
+        { key: 'wextra', label: 'Extra water measured (carried out with the wet gases)', value: 0.04, unit: 'fraction' },
+        { key: 'wNm3', label: 'Water per normal m³ of hydrogen, with the extra', formula: '=CELLWRIGHT.WATERPERH2("Nm3",{wextra})', unit: 'kg/Nm³', digits: 4 },
+        { label: 'Water for the run', formula: '={h2flow}*{hours}*{wNm3}', unit: 'kg', digits: 1 },
+        { table: 'xo', caption: 'Hydrogen in the oxygen from crossover at the operating current density (invented crossover figures)', columns: [
+          { key: 'x', header: 'Hydrogen crossover', unit: 'A/m²', values: [5, 15, 40] },
+          { header: 'H2 in O2', unit: 'fraction', formula: '=CELLWRIGHT.GASCROSSOVER({i}*10000,{xo.x})', digits: 4 },
+          { header: 'Share of the 4 vol % limit', unit: 'fraction', spill: true, digits: 3 },
+        ] },
+        { text: 'A screening figure: gas-purity monitoring, alarm and shutdown limits follow the applicable standards and codes, and limits move with pressure and temperature.' },
+        { table: 'vlog', caption: 'Cell voltage log at constant current (invented)', columns: [
+          { key: 't', header: 'Operating hours', unit: 'h', values: [0, 250, 500, 750, 1000, 1250] },
+          { key: 'U', header: 'Mean cell voltage', unit: 'V', values: [1.912, 1.915, 1.916, 1.921, 1.922, 1.926] },
+        ] },
+        { table: 'deg', caption: 'Degradation from the log: least-squares slope (one formula, spilled)', columns: [
+          { key: 'what', header: 'Log', values: ['test run 7'] },
+          { header: 'Degradation rate', unit: 'µV/h', formula: '=CELLWRIGHT.DEGRADATIONRATE({vlog.U},{vlog.t})', digits: 1 },
+          { header: 'Standard error', unit: 'µV/h', spill: true, digits: 1 },
+          { header: 'Readings', spill: true, digits: 0 },
+        ] },
+        { table: 'pcost', caption: 'Energy and power cost per tonne of hydrogen (rectifier 95 %, invented prices)', columns: [
+          { key: 'p', header: 'Price', unit: 'per kWh', values: [0.05, 0.09] },
+          { header: 'DC energy', unit: 'kWh/t', formula: '=CELLWRIGHT.POWERCOST({Ucell},"H2",2,0.95,{pcost.p},{eta})', digits: 0 },
+          { header: 'AC energy', unit: 'kWh/t', spill: true, digits: 0 },
+          { header: 'Power cost', unit: 'per t', spill: true, digits: 0 },
+        ] },
+      ],
+    },
+
+    /* ------------------------------------------------------------------------------------ */
+    {
+      name: 'Tankhouse',
+      title: 'Quillbray zinc tankhouse (invented): electrowinning from sulfate',
+      intro: [
+        'ZnSO4 + H2O → Zn + H2SO4 + ½ O2 on lead-alloy anodes. Every plant figure below is invented for the demonstration.',
+        'The acid the cells return to the leach follows the sulfate balance; manganese in the liquor forms MnO2 on the anodes with a small share of the charge and adds to it.',
+      ],
+      blocks: [
+        { section: 'Cell line' },
+        { key: 'It', label: 'Current per cell', value: 30000, unit: 'A' },
+        { key: 'nc', label: 'Cells in the section', value: 100 },
+        { key: 'ce', label: 'Cathode current efficiency', value: 0.9, unit: 'fraction' },
+        { key: 'Uc', label: 'Mean cell voltage', value: 3.3, unit: 'V' },
+        { key: 'zn', label: 'Zinc per day', formula: '={nc}*CELLWRIGHT.DEPOSITMASS({It},24,"Zn",2,{ce})/1000000', unit: 't/day', digits: 2 },
+
+        { section: 'Acid and the manganese side reaction' },
+        { key: 'fmn', label: 'Share of the charge forming MnO2 at the anodes', value: 0.008, unit: 'fraction' },
+        { label: 'MnO2 per cell per day', formula: '=CELLWRIGHT.DEPOSITMASS({It},24,"MnO2",2,{fmn})/1000', unit: 'kg/day', digits: 2, note: 'Mn²⁺ + 2H2O → MnO2 + 4H⁺ + 2e⁻: n = 2, the share as the efficiency' },
+        { key: 'acid', label: 'Acid returned per tonne of zinc', formula: '=CELLWRIGHT.ACIDPERTONNE("Zn",2,{ce},{fmn})', unit: 't/t', digits: 3, note: 'without manganese: 1.500 t/t whatever the cathode efficiency' },
+        { label: 'Acid returned to the leach per day', formula: '={zn}*{acid}', unit: 't/day', digits: 1 },
+
+        { section: 'Cathode overpotential near the limiting current (invented kinetic data, 38 °C)' },
+        { key: 'iL', label: 'Limiting current density of zinc deposition', value: 1500, unit: 'A/m²' },
+        { table: 'ov', caption: 'Concentration term alone, and with the Tafel term (i0 = 10 A/m², 120 mV/decade)', columns: [
+          { key: 'j', header: 'Current density', unit: 'A/m²', values: [300, 500, 800, 1200] },
+          { header: 'Concentration overpotential', unit: 'V', formula: '=CELLWRIGHT.CONCOVERPOTENTIAL({ov.j},{iL},2,38)', digits: 4 },
+          { header: 'Tafel + concentration', unit: 'V', formula: '=CELLWRIGHT.TAFELCONCOVERPOTENTIAL({ov.j},10,0.12,{iL},2,38)', digits: 4 },
+        ] },
+        { text: 'Negative: cathodic overpotentials in the electrode-kinetics convention; the cell needs their magnitude. At the limiting current the functions answer #VALUE!.' },
+
+        { section: 'Energy and power cost per tonne of zinc (rectifier 96 %)' },
+        { label: 'DC energy per tonne (SPECIFICENERGY × 1000)', formula: '=CELLWRIGHT.SPECIFICENERGY({Uc},"Zn",2,{ce})*1000', unit: 'kWh/t', digits: 0 },
+        { table: 'zcost', caption: 'One formula per price: DC, AC and cost spill to the right', columns: [
+          { key: 'p', header: 'Price', unit: 'per kWh', values: [0.06, 0.09] },
+          { header: 'DC energy', unit: 'kWh/t', formula: '=CELLWRIGHT.POWERCOST({Uc},"Zn",2,0.96,{zcost.p},{ce})', digits: 0 },
+          { header: 'AC energy', unit: 'kWh/t', spill: true, digits: 0 },
+          { header: 'Power cost', unit: 'per t', spill: true, digits: 0 },
+        ] },
+        { text: 'Auxiliary loads (pumps, cooling towers, cranes) come on top. Acid mist and hydrogen from the cells are handled as the site\'s permits and the applicable codes require.' },
       ],
     },
 

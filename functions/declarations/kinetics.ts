@@ -47,6 +47,36 @@ function tafelslope(alpha: any[][], temperature_C?: any[][]): any[][] {
 }
 
 /**
+ * Concentration (mass-transfer) overpotential of a cathodic reaction fed by diffusion, (RT/nF)·ln(1 − i/iL), in V (Bard & Faulkner, Electrochemical Methods, §1.4). Current densities as magnitudes; the result is negative (electrode-kinetics convention: a cathodic overpotential is negative; the voltage the cell needs is its magnitude). At or above the limiting current density, #VALUE!.
+ * @customfunction CONCOVERPOTENTIAL
+ * @helpurl https://localhost:3000/docs/functions.html#concoverpotential
+ * @param current_density Magnitude of the cathodic current density (≥ 0), in the unit of the limiting current density.
+ * @param limiting_current_density Magnitude of the limiting current density (> 0), same unit.
+ * @param n Electrons transferred per ion reduced (2 for Cu2+, Zn2+, Ni2+).
+ * @param [temperature_C] Temperature in °C (default 25).
+ * @returns Overpotential in V (≤ 0).
+ */
+function concoverpotential(current_density: any[][], limiting_current_density: any[][], n: any[][], temperature_C?: any[][]): any[][] {
+  return F.CONCOVERPOTENTIAL(current_density, limiting_current_density, n, temperature_C) as any;
+}
+
+/**
+ * Overpotential of a cathodic reaction as a Tafel (activation) term plus a concentration term, −b·log10(i/i0) + (RT/nF)·ln(1 − i/iL), in V. Current densities as magnitudes in one unit; the result is negative (a cathodic overpotential; the cell needs its magnitude). The Tafel line needs i ≥ 10·i0 (nearer equilibrium use OVERPOTENTIAL); at or above iL, #VALUE!. The two losses are added as independent, the usual engineering form.
+ * @customfunction TAFELCONCOVERPOTENTIAL
+ * @helpurl https://localhost:3000/docs/functions.html#tafelconcoverpotential
+ * @param current_density Magnitude of the cathodic current density (> 0).
+ * @param i0 Exchange current density (> 0), same unit.
+ * @param tafel_slope_V Tafel slope in V per decade (0.005 to 1; a negative value is taken by its magnitude; a value like 120 is refused as mV/decade).
+ * @param limiting_current_density Limiting current density (> 0), same unit.
+ * @param n Electrons transferred per ion reduced (2 for Cu2+, Zn2+, Ni2+).
+ * @param [temperature_C] Temperature in °C (default 25).
+ * @returns Overpotential in V (< 0).
+ */
+function tafelconcoverpotential(current_density: any[][], i0: any[][], tafel_slope_V: any[][], limiting_current_density: any[][], n: any[][], temperature_C?: any[][]): any[][] {
+  return F.TAFELCONCOVERPOTENTIAL(current_density, i0, tafel_slope_V, limiting_current_density, n, temperature_C) as any;
+}
+
+/**
  * Uniform corrosion penetration rate K1·icorr·EW/ρ (Faraday's law, K1 of ASTM G102), in mm/year.
  * @customfunction CORROSIONRATE
  * @helpurl https://localhost:3000/docs/functions.html#corrosionrate

@@ -1,12 +1,14 @@
-/** Electrode kinetics and corrosion: Butler–Volmer and its inverse, Tafel slope, ASTM G102 rate, Stern–Geary. */
+/** Electrode kinetics and corrosion: Butler–Volmer and its inverse, Tafel slope, concentration overpotential, ASTM G102 rate, Stern–Geary. */
 import { butlerVolmer } from '../../src/kinetics/butlerVolmer';
+import { concentrationOverpotential } from '../../src/kinetics/concentrationOverpotential';
 import { corrosionRate } from '../../src/kinetics/corrosionRate';
 import { overpotential } from '../../src/kinetics/overpotential';
 import { sternGeary } from '../../src/kinetics/sternGeary';
+import { tafelConcentrationOverpotential } from '../../src/kinetics/tafelConcentrationOverpotential';
 import { tafelSlope } from '../../src/kinetics/tafelSlope';
 import { PLAUSIBLE, plausible } from '../../src/corrosion/plausible';
 import { type ArgSpec, domains, worksheet } from '../adapter';
-import { num, optNum, temperatureC } from '../args';
+import { electrons, num, optNum, temperatureC } from '../args';
 
 
 /** Apparent transfer coefficients (n included): > 0, may exceed 1. */
@@ -45,6 +47,42 @@ export const TAFELSLOPE = worksheet({
   result: 'V per decade.',
   helpAnchor: 'tafelslope',
   compute: (a: number, t: number) => tafelSlope(plausible('alpha', a, PLAUSIBLE.alpha), t),
+});
+
+/** Current densities of the concentration terms, magnitudes in any one unit. */
+const magnitude = (name: string, domain = domains.positive): ArgSpec => num(name, domain, 'any current-density unit');
+
+export const CONCOVERPOTENTIAL = worksheet({
+  id: 'CONCOVERPOTENTIAL',
+  description:
+    'Concentration (mass-transfer) overpotential of a cathodic reaction fed by diffusion, (RT/nF)·ln(1 − i/iL), in V (Bard & Faulkner, Electrochemical Methods, §1.4). Current densities as magnitudes; the result is negative (electrode-kinetics convention: a cathodic overpotential is negative; the voltage the cell needs is its magnitude). At or above the limiting current density, #VALUE!.',
+  args: [
+    { ...magnitude('current_density', domains.nonNegative), help: 'Magnitude of the cathodic current density (≥ 0), in the unit of the limiting current density.' },
+    { ...magnitude('limiting_current_density'), help: 'Magnitude of the limiting current density (> 0), same unit.' },
+    { ...electrons, help: 'Electrons transferred per ion reduced (2 for Cu2+, Zn2+, Ni2+).' },
+    temperatureC,
+  ],
+  result: 'Overpotential in V (≤ 0).',
+  helpAnchor: 'concoverpotential',
+  compute: concentrationOverpotential,
+});
+
+export const TAFELCONCOVERPOTENTIAL = worksheet({
+  id: 'TAFELCONCOVERPOTENTIAL',
+  description:
+    'Overpotential of a cathodic reaction as a Tafel (activation) term plus a concentration term, −b·log10(i/i0) + (RT/nF)·ln(1 − i/iL), in V. Current densities as magnitudes in one unit; the result is negative (a cathodic overpotential; the cell needs its magnitude). The Tafel line needs i ≥ 10·i0 (nearer equilibrium use OVERPOTENTIAL); at or above iL, #VALUE!. The two losses are added as independent, the usual engineering form.',
+  args: [
+    { ...magnitude('current_density'), help: 'Magnitude of the cathodic current density (> 0).' },
+    { ...magnitude('i0'), help: 'Exchange current density (> 0), same unit.' },
+    { ...num('tafel_slope_V', domains.nonZero, 'V/decade'), help: 'Tafel slope in V per decade (0.005 to 1; a negative value is taken by its magnitude; a value like 120 is refused as mV/decade).' },
+    { ...magnitude('limiting_current_density'), help: 'Limiting current density (> 0), same unit.' },
+    { ...electrons, help: 'Electrons transferred per ion reduced (2 for Cu2+, Zn2+, Ni2+).' },
+    temperatureC,
+  ],
+  result: 'Overpotential in V (< 0).',
+  helpAnchor: 'tafelconcoverpotential',
+  compute: (i: number, i0v: number, b: number, iL: number, n: number, t: number) =>
+    tafelConcentrationOverpotential(i, i0v, plausible('tafel_slope_V', b, PLAUSIBLE.tafelV), iL, n, t),
 });
 
 export const CORROSIONRATE = worksheet({
