@@ -107,3 +107,23 @@ describe('refPotential: Hg/HgO at alkaline-electrolyser temperatures', () => {
     expect(() => refPotential(k, 95)).toThrow(/90 °C/);
   });
 });
+
+describe('refPotential: every built-in electrode over its range (property)', () => {
+  const table = builtinTable();
+  const fieldOnly = new Set(['Ag/AgCl/seawater', 'Zn/seawater']);
+  const limitOf = (key: string): number => (/^(SCE|SSCE|Hg\/Hg2Cl2)/.test(key) ? 80 : /^Hg\/HgO/.test(key) ? 90 : 100);
+  it('answers a finite potential at every temperature of its range, and nothing jumps (no step above 0.05 mV per 0.01 K)', () => {
+    for (const row of table.electrodes) {
+      if (fieldOnly.has(row.key)) continue;
+      const max = limitOf(row.key);
+      let prev = refPotential(row, 0);
+      for (let i = 1; i <= max * 100; i++) {
+        const t = i / 100; // exactly 25 at i = 2500, where the stored value is returned
+        const e = refPotential(row, t);
+        expect(Number.isFinite(e), `${row.key} ${t} °C`).toBe(true);
+        if (Math.abs(e - prev) >= 5e-5) expect.fail(`${row.key}: step of ${((e - prev) * 1000).toFixed(3)} mV at ${t.toFixed(2)} °C`);
+        prev = e;
+      }
+    }
+  });
+});
