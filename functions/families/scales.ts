@@ -15,10 +15,10 @@ const scaleArg = (name: string): ArgSpec => ({ name, kind: 'text' });
 
 export const REFPOTENTIAL = worksheet({
   id: 'REFPOTENTIAL',
-  description: 'Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table\'s dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4 with a filling of fixed concentration, E°(T) of the electrode reaction (Ag/AgCl: measured by Bates & Bower; others: from the species data) with the filling\'s activity held constant. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.',
+  description: 'Potential of a reference electrode vs SHE, in V, with the electrode at the temperature: the table\'s dE/dT where published; else, for Ag/AgCl, calomel, Hg/HgO and Hg/Hg2SO4, E°(T) of the electrode reaction (Ag/AgCl and calomel: from Bates & Bower\'s measurement; others: from the species data) with a fixed filling\'s activity held constant, or a saturated filling\'s (KCl, K2SO4, NaCl) set by the salt\'s solubility product at the temperature; liquid junctions neglected. Calomel electrodes are used up to 80 °C, Hg/HgO up to 90 °C. For cathodic protection, compare a reading with the criterion the standard states for the electrode used (PROTECTIONCRITERION), not with a criterion converted from another electrode.',
   args: [
     { name: 'electrode', kind: 'electrode', help: 'Reference electrode key or alias, e.g. "SCE", "Ag/AgCl/KCl(sat)", "CSE" (case and spaces ignored).' },
-    { ...temperatureC, help: 'Temperature in °C of the electrode (default 25; 0 to 100; saturated and field electrodes without dE/dT answer #N/A away from 25 °C).' },
+    { ...temperatureC, help: 'Temperature in °C of the electrode (default 25; 0 to 100, calomel to 80, Hg/HgO to 90; seawater and field electrodes without dE/dT answer #N/A away from 25 °C).' },
   ],
   result: 'Potential in V vs SHE.',
   helpAnchor: 'refpotential',

@@ -30,6 +30,16 @@ describe('reference scales', () => {
     expect((noSlope as FakeError).message).toMatch(/dE\/dT/);
     expect(isError(one(await run('REFPOTENTIAL', 'SCE', 150)), '#VALUE!')).toBe(true);
   });
+  it('away from 25 °C: a mercurous-sulfate electrode at 40 °C, Hg/HgO at 80 °C; calomel above 80 °C #VALUE! naming the limit', async () => {
+    // MSE (sat. K2SO4) 0.637 V at 25 °C (Yosypchuk & Novotný 2003), 0.6233 V at 40 °C by its reaction at the sulfate activity of
+    // saturated K2SO4 (tests/scales/saturatedFilling.test.ts); Hg/HgO in 1 mol/kg NaOH 0.1077 V at 25 °C (J. Power Sources 161 (2006)
+    // 1217), 0.0376 V at 80 °C with the filling held
+    expect(one(await run('CONVERTPOTENTIAL', 1.8, 'SHE', 'MSE', null, 40))).toBeCloseTo(1.8 - 0.6233, 4);
+    expect(one(await run('REFPOTENTIAL', 'Hg/HgO/NaOH(1M)', 80))).toBeCloseTo(0.0376, 4);
+    const hot = one(await run('REFPOTENTIAL', 'SCE', 85));
+    expect(isError(hot, '#VALUE!')).toBe(true);
+    expect((hot as FakeError).message).toMatch(/80 °C/);
+  });
   it('CONVERTPOTENTIAL: the NACE SP0169 criterion −0.85 V vs CSE on the SHE and SCE scales', async () => {
     // NACE SP0169: −850 mV vs CSE; CSE +0.316 V (Szabó & Bakos 2010), SCE +0.2412 V (Bard & Faulkner)
     const r = (await run('CONVERTPOTENTIAL', -0.85, 'CSE', [['SHE', 'SCE']])) as number[][];
