@@ -325,8 +325,13 @@ export function renderReadmeTable(model) {
   return L.join('\n');
 }
 
-/** README.md with its generated block replaced (the text between the two markers). */
-function withReadmeTable(readme, table) {
+/** The count in the README's opening paragraph ("N functions in the `CELLWRIGHT` namespace"), kept true. */
+const README_COUNT = /\b\d+ functions in the `CELLWRIGHT` namespace/;
+
+/** README.md with its generated block replaced (the text between the two markers) and its function count set. */
+function withReadmeTable(readme, table, count) {
+  if (!README_COUNT.test(readme)) throw new Error('README.md no longer says "N functions in the `CELLWRIGHT` namespace"');
+  readme = readme.replace(README_COUNT, `${count} functions in the \`CELLWRIGHT\` namespace`);
   const start = README_START.exec(readme);
   const end = readme.indexOf(README_END);
   if (!start || end < start.index) throw new Error('README.md has no <!-- functions:start --> … <!-- functions:end --> block');
@@ -404,7 +409,7 @@ export function renderHtml(model) {
 
 export async function generateDocs() {
   const model = await buildModel();
-  const readme = withReadmeTable(readFileSync(README, 'utf8'), renderReadmeTable(model));
+  const readme = withReadmeTable(readFileSync(README, 'utf8'), renderReadmeTable(model), model.count);
   return { model, md: renderMarkdown(model), html: renderHtml(model), readme };
 }
 
