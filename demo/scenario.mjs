@@ -404,7 +404,8 @@ export const scenario = {
         { table: 'tc', caption: 'Reversible and thermoneutral voltage, pure water, 1 bar', columns: [
           { key: 'T', header: 'Temperature', unit: '°C', values: [25, 40, 60, 80, 90] },
           { key: 'urev', header: 'Reversible voltage', unit: 'V', formula: '=CELLWRIGHT.WATERSPLITVOLTAGE({tc.T})', digits: 4 },
-          { key: 'utn', header: 'Thermoneutral voltage', unit: 'V', formula: '=CELLWRIGHT.WATERTHERMONEUTRAL({tc.T})', digits: 4 },
+          { key: 'utn', header: 'Thermoneutral voltage (HHV)', unit: 'V', formula: '=CELLWRIGHT.WATERTHERMONEUTRAL({tc.T})', digits: 4 },
+          { key: 'utnl', header: 'Thermoneutral voltage (LHV)', unit: 'V', formula: '=CELLWRIGHT.WATERTHERMONEUTRAL({tc.T},"LHV")', digits: 4 },
         ] },
         { label: 'Reversible voltage at 80 °C, 30 bar, lye water activity 0.7', formula: '=CELLWRIGHT.WATERSPLITVOLTAGE(80,30,0.7)', unit: 'V', digits: 4, note: 'water activity of the lye: an invented figure for the demo' },
         { label: 'For comparison: zinc electrowinning decomposition voltage, 38 °C', formula: '=CELLWRIGHT.ELECTROWINVOLTAGE("Zn",38,0.3,0.5,0.21,0.9)', unit: 'V', digits: 4, note: 'invented tankhouse activities' },

@@ -18,14 +18,15 @@ function watersplitvoltage(temperature_C?: any[][], pressure_bar?: any[][], wate
 }
 
 /**
- * Thermoneutral voltage of water electrolysis ΔH(T)/2F, positive, with ΔH(T) = ΔH(25 °C) + ΔCp·(T − 25) from the species data (1.4812 V at 25 °C, 1.4721 V at 80 °C). Higher-heating-value basis (liquid water). 0–100 °C.
+ * Thermoneutral voltage of water electrolysis ΔH(T)/2F, positive, with ΔH(T) = ΔH(25 °C) + ΔCp·(T − 25) from the species data (NBS 1982). basis "HHV" (default, liquid water): 1.4812 V at 25 °C, 1.4721 V at 80 °C; "LHV" (water vapour, the HHV value less the vaporisation enthalpy at T over 2F): 1.2531 V at 25 °C, 1.2560 V at 80 °C. 0–100 °C.
  * @customfunction WATERTHERMONEUTRAL
  * @helpurl https://localhost:3000/docs/functions.html#waterthermoneutral
  * @param [temperature_C] Temperature in °C, 0 to 100 (default 25).
+ * @param [basis] "HHV" (higher heating value, liquid water) or "LHV" (lower heating value, water vapour); default "HHV".
  * @returns Thermoneutral voltage in V (positive).
  */
-function waterthermoneutral(temperature_C?: any[][]): any[][] {
-  return F.WATERTHERMONEUTRAL(temperature_C) as any;
+function waterthermoneutral(temperature_C?: any[][], basis?: any[][]): any[][] {
+  return F.WATERTHERMONEUTRAL(temperature_C, basis) as any;
 }
 
 /**

@@ -5,6 +5,7 @@
  */
 import { electrowinVoltage } from '../../src/electrolysis/electrowinVoltage';
 import { thermoneutralVoltage } from '../../src/electrolysis/thermoneutralVoltage';
+import { waterThermoneutral } from '../../src/electrolysis/waterThermoneutral';
 import { waterSplitVoltage } from '../../src/electrolysis/waterSplitVoltage';
 import { NotFoundError } from '../../src/errors';
 import { type ArgSpec, domains, worksheet } from '../adapter';
@@ -23,11 +24,14 @@ export const WATERSPLITVOLTAGE = worksheet({
 
 export const WATERTHERMONEUTRAL = worksheet({
   id: 'WATERTHERMONEUTRAL',
-  description: 'Thermoneutral voltage of water electrolysis ΔH(T)/2F, positive, with ΔH(T) = ΔH(25 °C) + ΔCp·(T − 25) from the species data (1.4812 V at 25 °C, 1.4721 V at 80 °C). Higher-heating-value basis (liquid water). 0–100 °C.',
-  args: [{ ...temperatureC, help: 'Temperature in °C, 0 to 100 (default 25).' }],
+  description: 'Thermoneutral voltage of water electrolysis ΔH(T)/2F, positive, with ΔH(T) = ΔH(25 °C) + ΔCp·(T − 25) from the species data (NBS 1982). basis "HHV" (default, liquid water): 1.4812 V at 25 °C, 1.4721 V at 80 °C; "LHV" (water vapour, the HHV value less the vaporisation enthalpy at T over 2F): 1.2531 V at 25 °C, 1.2560 V at 80 °C. 0–100 °C.',
+  args: [
+    { ...temperatureC, help: 'Temperature in °C, 0 to 100 (default 25).' },
+    { name: 'basis', kind: 'text', optional: true, default: 'HHV', unit: '', help: '"HHV" (higher heating value, liquid water) or "LHV" (lower heating value, water vapour); default "HHV".' },
+  ],
   result: 'Thermoneutral voltage in V (positive).',
   helpAnchor: 'waterthermoneutral',
-  compute: (t: number) => thermoneutralVoltage('H2O', t),
+  compute: (t: number, basis: string) => waterThermoneutral(t, basis),
 });
 
 export const ELECTROWINVOLTAGE = worksheet({

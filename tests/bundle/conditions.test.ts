@@ -46,6 +46,23 @@ describe('WATERTHERMONEUTRAL', () => {
     // "at 80 °C the thermoneutral voltage is about 9 mV below −ΔH(25 °C)/2F"
     expect((u25 - u80) * 1000).toBeCloseTo(9.06, 1);
   });
+  it('lower-heating-value basis: water vapour, 1.2531 V at 25 °C and rising with temperature', async () => {
+    // NBS 1982 (data/NBS_Tables.csv of the NIST digital edition, line 48): H2O(g) ΔfH° = −241.818 kJ/mol, Cp° 33.577 J/(mol·K)
+    const l25 = one(await call('WATERTHERMONEUTRAL', 25, 'LHV')) as number;
+    expect(l25).toBeCloseTo(241818 / (2 * F), 10);
+    const l80 = one(await call('WATERTHERMONEUTRAL', 80, 'lhv')) as number;
+    const dCpGas = 28.824 + 29.355 / 2 - 33.577;
+    expect(l80).toBeCloseTo((241818 + dCpGas * 55) / (2 * F), 10);
+    // the lower heating value of hydrogen, 241.8 kJ/mol, gives about 1.25 V: common practice
+    expect(l25).toBeCloseTo(1.253, 3);
+    expect(one(await call('WATERTHERMONEUTRAL', 60, 'HHV'))).toBe(one(await call('WATERTHERMONEUTRAL', 60)));
+    const bad = one(await call('WATERTHERMONEUTRAL', 25, 'net'));
+    expect(isError(bad, '#VALUE!')).toBe(true);
+    expect(String((bad as { message?: string }).message)).toMatch(/HHV.*LHV/);
+    const col = await call('WATERTHERMONEUTRAL', [[25], [80]], 'LHV');
+    expect(col[0][0]).toBeCloseTo(l25, 12);
+    expect(col[1][0]).toBeCloseTo(l80, 12);
+  });
 });
 
 describe('ELECTROWINVOLTAGE and ELECTROWINTHERMONEUTRAL', () => {
