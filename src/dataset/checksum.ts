@@ -4,7 +4,11 @@
  * checksums. Equal data always gives equal checksums, whatever version or time it was pinned at.
  */
 import { canonicalJson } from '../store/canonical';
+import { recordsOf } from '../store/rows';
 import { sha256Hex } from '../store/sha256';
+import { builtinChecksum } from '../store/stored';
+import { builtinTable } from '../table/builtin';
+import { BUILD_TIME } from './buildTime';
 import { BUILTIN_PARTS, DATA_PARTS, type DataPartName } from './parts';
 
 /**
@@ -19,14 +23,29 @@ export function partChecksum(content: unknown): string {
 
 let builtinSums: Readonly<Record<DataPartName, string>> | null = null;
 
-/** The checksums of the add-in's built-in parts (computed once). */
+/** The checksums of the add-in's built-in parts (computed once, or at build time in the bundles). */
 export function builtinPartChecksums(): Readonly<Record<DataPartName, string>> {
+  if (builtinSums === null && BUILD_TIME !== null) builtinSums = Object.freeze({ ...BUILD_TIME.partChecksums });
   if (builtinSums === null) {
     const sums = {} as Record<DataPartName, string>;
     for (const p of DATA_PARTS) sums[p] = partChecksum(BUILTIN_PARTS[p]);
     builtinSums = Object.freeze(sums);
   }
   return builtinSums;
+}
+
+let builtinTableSum: string | null = null;
+
+/**
+ * The built-in table's content checksum, builtinChecksum(recordsOf(builtinTable())) (computed once, or
+ * at build time in the bundles).
+ *
+ * Syntax: builtinTableChecksum()
+ * Example: builtinTableChecksum() → "sha256:c95e2cf4…"
+ */
+export function builtinTableChecksum(): string {
+  builtinTableSum ??= BUILD_TIME?.tableChecksum ?? builtinChecksum(recordsOf(builtinTable()));
+  return builtinTableSum;
 }
 
 /**
