@@ -1,7 +1,8 @@
 /**
  * Values the production build computes once from the built-in data, so that the add-in does not
  * compute them at every start: the built-in potential table already checked (src/table/prebuilt.ts),
- * its content checksum and the checksums of the built-in data parts (src/dataset/checksum.ts).
+ * its content checksum, the checksums of the built-in data parts and the two checksums over those
+ * (src/dataset/checksum.ts).
  *
  * This file is what the sources say: nothing computed ahead (BUILD_TIME is null), and the built-in
  * table's records, which src/table/builtin.ts then checks and builds at first use. Tests and scripts
@@ -23,6 +24,10 @@ export interface BuildTimeValues {
   readonly tableChecksum: string;
   /** The checksum of each built-in data part (partChecksum of its content). */
   readonly partChecksums: Readonly<Record<DataPartName, string>>;
+  /** partsChecksum of the built-in parts' checksums. */
+  readonly partsChecksum: string;
+  /** dataSetChecksum of the built-in table's and parts' checksums. */
+  readonly dataSetChecksum: string;
 }
 
 /** Null in the sources; the values computed at build time in the bundles. */

@@ -49,6 +49,34 @@ export function builtinTableChecksum(): string {
 }
 
 /**
+ * The checksum over the nine parts' checksums, { atomicweights, species, … } in that order: what a
+ * workbook records as the data (besides the table) its results were computed with.
+ *
+ * Syntax: partsChecksum({ atomicweights, species, … })
+ */
+export function partsChecksum(sums: Readonly<Record<DataPartName, string>>): string {
+  const ordered: Record<string, string> = {};
+  for (const p of DATA_PARTS) ordered[p] = sums[p];
+  return partChecksum(ordered);
+}
+
+let builtinPartsSum: string | null = null;
+
+/** partsChecksum of the built-in parts (computed once, or at build time in the bundles). */
+export function builtinPartsChecksum(): string {
+  builtinPartsSum ??= BUILD_TIME?.partsChecksum ?? partsChecksum(builtinPartChecksums());
+  return builtinPartsSum;
+}
+
+let builtinSetSum: string | null = null;
+
+/** dataSetChecksum of the built-in table and parts (computed once, or at build time in the bundles). */
+export function builtinDataSetChecksum(): string {
+  builtinSetSum ??= BUILD_TIME?.dataSetChecksum ?? dataSetChecksum({ table: builtinTableChecksum(), ...builtinPartChecksums() });
+  return builtinSetSum;
+}
+
+/**
  * The data set's checksum: "sha256:" + SHA-256 of the canonical JSON of { table, <part>: checksum, … },
  * the potential table's checksum and every other part's.
  *

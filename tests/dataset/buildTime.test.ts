@@ -1,7 +1,7 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import { BUILD_TIME, BUILTIN_RECORDS } from '../../src/dataset/buildTime';
-import { builtinPartChecksums, builtinTableChecksum, partChecksum } from '../../src/dataset/checksum';
+import { builtinDataSetChecksum, builtinPartChecksums, builtinPartsChecksum, builtinTableChecksum, dataSetChecksum, partChecksum } from '../../src/dataset/checksum';
 import { BUILTIN_PARTS, DATA_PARTS } from '../../src/dataset/parts';
 import { recordsOf } from '../../src/store/rows';
 import { builtinChecksum } from '../../src/store/stored';
@@ -34,13 +34,13 @@ describe('build-time values (src/dataset/buildTime.ts)', () => {
     expect(BUILTIN_RECORDS?.electrodes).toBe(electrodes.electrodes);
   });
 
-  it('the build replaces the module by the table, its checksum and the parts\' checksums the sources compute', async () => {
+  it('the build replaces the module by the table and the checksums the sources compute', async () => {
     const { module, dependencies } = await runLoader();
     expect(module).toContain('export const BUILTIN_RECORDS = null;');
     expect(dependencies.map((d) => d.split(/[\\/]/).pop())).toEqual(['src', 'data']);
     const m = /^export const BUILD_TIME = JSON\.parse\((".*")\);$/m.exec(module);
     expect(m).not.toBeNull();
-    const values = JSON.parse(JSON.parse(m![1]) as string) as { table: PrebuiltTable; tableChecksum: string; partChecksums: Record<string, string> };
+    const values = JSON.parse(JSON.parse(m![1]) as string) as { table: PrebuiltTable; tableChecksum: string; partChecksums: Record<string, string>; partsChecksum: string; dataSetChecksum: string };
 
     const built = buildTable(couples.version, couples.couples, electrodes.electrodes);
     const fromBuild = tableFromPrebuilt(values.table);
@@ -54,5 +54,12 @@ describe('build-time values (src/dataset/buildTime.ts)', () => {
     expect(Object.keys(values.partChecksums)).toEqual([...DATA_PARTS]);
     for (const p of DATA_PARTS) expect(values.partChecksums[p]).toBe(partChecksum(BUILTIN_PARTS[p]));
     expect(values.partChecksums).toEqual(builtinPartChecksums());
+    // the checksum over the nine parts' (what a workbook records) and the data set's
+    const nine: Record<string, string> = {};
+    for (const p of DATA_PARTS) nine[p] = partChecksum(BUILTIN_PARTS[p]);
+    expect(values.partsChecksum).toBe(partChecksum(nine));
+    expect(values.partsChecksum).toBe(builtinPartsChecksum());
+    expect(values.dataSetChecksum).toBe(dataSetChecksum({ table: values.tableChecksum, ...(nine as ReturnType<typeof builtinPartChecksums>) }));
+    expect(values.dataSetChecksum).toBe(builtinDataSetChecksum());
   }, 60_000);
 });
