@@ -17,6 +17,8 @@ const declarations = fs
   .sort()
   .map((f) => `./functions/declarations/${f}`);
 
+const BUILD_TIME_MODULE = path.resolve(__dirname, 'src/dataset/buildTime.ts');
+
 module.exports = (env, argv) => {
   const production = argv.mode !== 'development';
   // Where dist/ will be served from: https://localhost:3000/ unless CELLWRIGHT_BASE_URL says otherwise.
@@ -26,7 +28,7 @@ module.exports = (env, argv) => {
     devtool: production ? false : 'source-map',
     // Persistent cache (node_modules/.cache/webpack): a second build with unchanged sources, such as the
     // deployable build the tests make after npm test's own, reuses the compiled and minified modules.
-    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs')] } },
+    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs'), require.resolve('./scripts/lib/buildTimeLoader.cjs'), require.resolve('./scripts/lib/buildTime.mjs')] } },
     target: ['web', 'es2020'],
     entry: {
       // One entry module that imports entry.ts and then every declaration, so that webpack joins the
@@ -44,7 +46,12 @@ module.exports = (env, argv) => {
     },
     resolve: { extensions: ['.ts', '.js', '.json'] },
     module: {
-      rules: [{ test: /\.ts$/, loader: 'ts-loader', exclude: /node_modules/, options: { transpileOnly: true } }],
+      rules: [
+        { test: /\.ts$/, loader: 'ts-loader', exclude: [/node_modules/, BUILD_TIME_MODULE], options: { transpileOnly: true } },
+        // The built-in table checked and the built-in checksums, computed once here instead of at every
+        // start (src/dataset/buildTime.ts; BENCHMARKS.md, cold start).
+        { test: BUILD_TIME_MODULE, loader: require.resolve('./scripts/lib/buildTimeLoader.cjs'), type: 'javascript/esm' },
+      ],
     },
     performance: { hints: false },
     plugins: [

@@ -7,9 +7,9 @@
  * function answers from a mix of pinned and built-in data. Nothing here writes to the workbook.
  */
 import { useDataParts } from '../src/dataset/active';
-import { builtinPartChecksums, partChecksum } from '../src/dataset/checksum';
+import { builtinPartChecksums, builtinPartsChecksum, partsChecksum } from '../src/dataset/checksum';
 import { type DataSetDescription, type TablePart, describeDataSet } from '../src/dataset/describe';
-import { DATA_PARTS } from '../src/dataset/parts';
+import { DATA_PARTS, type DataPartName } from '../src/dataset/parts';
 import { type PinnedData, partsWithPinned, readPinnedText } from '../src/dataset/pinned';
 
 let pinned: PinnedData | null = null;
@@ -73,10 +73,11 @@ export function pinnedDataInUse(): PinnedData | null {
  */
 export function dataPartsChecksum(): string {
   if (problem !== null) return 'unreadable';
-  const sums: Record<string, string> = {};
+  if (pinned === null) return builtinPartsChecksum();
+  const sums = {} as Record<DataPartName, string>;
   const builtin = builtinPartChecksums();
-  for (const p of DATA_PARTS) sums[p] = pinned?.checksums[p] ?? builtin[p];
-  return partChecksum(sums);
+  for (const p of DATA_PARTS) sums[p] = pinned.checksums[p] ?? builtin[p];
+  return partsChecksum(sums);
 }
 
 let description: { table: TablePart; value: DataSetDescription } | null = null;

@@ -21,7 +21,8 @@
  */
 import { recordsOf } from '../src/store/rows';
 import { InstallOrder } from '../src/store/installOrder';
-import { type StoredRead, builtinChecksum, readStoredText } from '../src/store/stored';
+import { type StoredRead, readStoredText } from '../src/store/stored';
+import { builtinTableChecksum } from '../src/dataset/checksum';
 import { BUILTIN_TABLE_SOURCE, builtinTable } from '../src/table/builtin';
 import { applyPinnedValue, dataPartsChecksum, dataSetInUse, lastPinnedValue, markDataUnreadable } from './dataHost';
 import type { CellwrightFunctionsHost, FunctionsHostStatus } from '../workbook/channel';
@@ -51,7 +52,7 @@ export function tableForStoredValue(value: unknown): TableInUse {
   const builtin = builtinTable();
   lastValue = value ?? null;
   if (value === null || value === undefined) {
-    details = { checksum: builtinChecksum(recordsOf(builtin)) };
+    details = { checksum: builtinTableChecksum() };
     return { kind: 'builtin', table: builtin };
   }
   let read: StoredRead;
@@ -77,7 +78,7 @@ export function hostStatus(): FunctionsHostStatus {
   if (tablePending() !== null) return { state: 'loading' };
   const t = tableInUse();
   if (t.kind === 'unreadable') return { state: 'unreadable', reason: t.reason, dataChecksum: dataPartsChecksum() };
-  if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinChecksum(recordsOf(t.table)) };
+  if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinTableChecksum() };
   const ds = dataSetInUse(tablePart());
   return {
     state: t.kind,
@@ -108,7 +109,7 @@ export function tablePart(): { pinned: boolean; version: string; checksum: strin
 /** Revision, checksum and change time (ISO 8601) of the table in use, as far as known. */
 export function tableDetails(): { readonly revision?: number; readonly checksum?: string; readonly changedAt?: string } {
   const t = tableInUse();
-  if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinChecksum(recordsOf(t.table)) };
+  if (t.kind === 'builtin' && details.checksum === undefined) details = { checksum: builtinTableChecksum() };
   return details;
 }
 

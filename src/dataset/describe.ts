@@ -4,7 +4,7 @@
  * add-in's built-in data, its version, checksum, row count and source. Pure: the callers say what the
  * workbook holds (the functions' status, the pane's model).
  */
-import { builtinPartChecksums, dataSetChecksum } from './checksum';
+import { builtinDataSetChecksum, builtinPartChecksums, builtinTableChecksum, dataSetChecksum } from './checksum';
 import { BUILTIN_PARTS, DATASET_VERSION, DATA_PARTS, type DataPartName, type DataParts, PART_INFO } from './parts';
 import type { PinnedData } from './pinned';
 
@@ -83,7 +83,9 @@ export function describeDataSet(table: TablePart, pinned: PinnedData | null): Da
       file: PART_INFO[name].file,
     });
   }
-  return { version: pinned !== null ? pinned.version : table.version, checksum: dataSetChecksum(sums), parts };
+  // The built-in data (or a pinned copy equal to it) has the checksum the build computed.
+  const builtin = pinned === null && table.checksum === builtinTableChecksum();
+  return { version: pinned !== null ? pinned.version : table.version, checksum: builtin ? builtinDataSetChecksum() : dataSetChecksum(sums), parts };
 }
 
 /** One changed value of a part: its place (a row key and field, or a path) with the value before and after (absent: added or removed). */

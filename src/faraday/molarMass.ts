@@ -1,4 +1,4 @@
-import Decimal from 'decimal.js';
+import Decimal from 'decimal.js-light';
 import { cachedOf } from '../dataset/active';
 import { parseSpecies } from '../chem/formula';
 import { InputError, NotFoundError, finite } from '../errors';
@@ -16,7 +16,7 @@ import { atomicWeight } from './atomicWeight';
  * "Na2SO4 10H2O" = "Na2SO4·10H2O"). Any other space inside a formula ("Cu SO4", "CuSO4 H2O",
  * "SO4 2-") throws InputError: it is never dropped silently. Spaces around the formula are ignored.
  *
- * The atomic weights are summed in decimal (decimal.js), so the result is the exact decimal sum of the
+ * The atomic weights are summed in decimal (decimal.js-light), so the result is the exact decimal sum of the
  * tabulated weights rounded once to a double: molarMass("CuSO4·5H2O") is 249.677, not 249.67700000000002.
  *
  * Syntax: molarMass(formula)

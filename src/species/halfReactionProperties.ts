@@ -1,12 +1,14 @@
 import { type HalfReaction, displaySpecies } from '../chem/halfReaction';
-import { parseSpecies } from '../chem/formula';
+import { type Species, parseSpecies } from '../chem/formula';
 import { cachedOf } from '../dataset/active';
 import { NotFoundError } from '../errors';
 import { speciesRecord } from './speciesRecord';
 import type { ReactionProperties } from './types';
 
 const T0 = 298.15;
-const HYDROGEN = { species: parseSpecies('H2'), phase: 'g' as const };
+// Read on first use, not when the bundle is evaluated.
+let hydrogen: { readonly species: Species; readonly phase: 'g' } | null = null;
+const HYDROGEN = (): { readonly species: Species; readonly phase: 'g' } => (hydrogen ??= { species: parseSpecies('H2'), phase: 'g' });
 
 /** Reaction properties by half-reaction object, computed once per species data in use. */
 const memos = cachedOf('species', () => new WeakMap<HalfReaction, ReactionProperties | NotFoundError>());
@@ -37,7 +39,7 @@ export function halfReactionProperties(hr: HalfReaction): ReactionProperties {
 
 function compute(hr: HalfReaction): ReactionProperties | NotFoundError {
   const terms = hr.species.map((t) => ({ nu: t.side === 'red' ? t.coefficient : -t.coefficient, term: t }));
-  terms.push({ nu: -hr.n / 2, term: { ...HYDROGEN, side: 'ox', coefficient: hr.n / 2 } });
+  terms.push({ nu: -hr.n / 2, term: { ...HYDROGEN(), side: 'ox', coefficient: hr.n / 2 } });
   const missing: string[] = [];
   let g = 0;
   let gFromG = true;

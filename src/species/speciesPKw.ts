@@ -1,5 +1,5 @@
 import { LN10, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
-import { parseHalfReaction } from '../chem/halfReaction';
+import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
 import { halfReactionProperties } from './halfReactionProperties';
 import { reactionGibbs } from './reactionGibbs';
 
@@ -8,7 +8,9 @@ import { reactionGibbs } from './reactionGibbs';
  * ion product comes from two half-reactions of the same species data: 2H2O + 2e- → H2 + 2OH- minus
  * 2H+ + 2e- → H2, whose difference is 2 H2O → 2 H+ + 2 OH-.
  */
-const WATER_TO_OH = parseHalfReaction('2H2O + 2e- -> H2 + 2OH-');
+// Read on first use, not when the bundle is evaluated (it is not needed before a pKw is asked for).
+let waterToOH: HalfReaction | null = null;
+const WATER_TO_OH = (): HalfReaction => (waterToOH ??= parseHalfReaction('2H2O + 2e- -> H2 + 2OH-'));
 
 /**
  * pKw = −log10 Kw of water at a temperature, from the species table: Kw = exp(−ΔrG°(T)/RT) for
@@ -24,6 +26,6 @@ const WATER_TO_OH = parseHalfReaction('2H2O + 2e- -> H2 + 2OH-');
 export function speciesPKw(temperatureC: number): number {
   const T = kelvin(temperatureC);
   // ΔrG of 2H2O + H2 → H2 + 2OH- + 2H+ (the hydrogen terms cancel): twice that of H2O → H+ + OH-.
-  const g = temperatureC === 25 ? halfReactionProperties(WATER_TO_OH).dG : reactionGibbs(halfReactionProperties(WATER_TO_OH), T);
+  const g = temperatureC === 25 ? halfReactionProperties(WATER_TO_OH()).dG : reactionGibbs(halfReactionProperties(WATER_TO_OH()), T);
   return g / 2 / (GAS_CONSTANT_J_PER_MOL_K * T * LN10);
 }

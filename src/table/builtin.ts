@@ -1,31 +1,35 @@
 /**
  * The built-in potential table, built once from data/couples.json and data/electrodes.json and
- * cached. It is the table in use whenever no workbook table is (functions/context.ts).
+ * cached. It is the table in use whenever no workbook table is (functions/context.ts). In the
+ * bundles its rows were checked when the add-in was built (src/dataset/buildTime.ts), so the first
+ * look-up only assembles the look-up maps.
  *
  * Every built-in row must pass the same checks as a workbook's rows (tests/table/builtin.test.ts
  * holds the data to that); a row that did not would be left out and listed by
  * builtinTableProblems() rather than break every function.
  */
 import couplesFile from '../../data/couples.json';
-import electrodesFile from '../../data/electrodes.json';
-import type { CouplesFile, ElectrodesFile } from './records';
+import { BUILD_TIME, BUILTIN_RECORDS } from '../dataset/buildTime';
+import { tableFromPrebuilt } from './prebuilt';
 import { type BuiltTable, type RowProblem, buildTable } from './table';
 import type { PotentialTable } from './types';
 
-const couplesData = couplesFile as unknown as CouplesFile;
-const electrodesData = electrodesFile as unknown as ElectrodesFile;
+// Only the version and the source of data/couples.json are read here, as properties (so that the
+// bundles carry only those two of the file): the rows come from src/dataset/buildTime.ts (the records
+// in the sources, the table checked at build time in the bundles).
 
 /** Version of the built-in table (the "version" of data/couples.json), e.g. "2026.1". */
-export const BUILTIN_TABLE_VERSION: string = couplesData.version;
+export const BUILTIN_TABLE_VERSION: string = couplesFile.version;
 
 /** The compilation the built-in couples come from (the "source" of data/couples.json). */
-export const BUILTIN_TABLE_SOURCE: string = couplesData.source ?? '';
+export const BUILTIN_TABLE_SOURCE: string = couplesFile.source;
 
 let cached: BuiltTable | null = null;
 
 function build(): BuiltTable {
   if (cached === null) {
-    cached = buildTable(BUILTIN_TABLE_VERSION, couplesData.couples ?? [], electrodesData.electrodes ?? []);
+    if (BUILD_TIME !== null) cached = tableFromPrebuilt(BUILD_TIME.table);
+    else cached = buildTable(BUILTIN_TABLE_VERSION, BUILTIN_RECORDS?.couples ?? [], BUILTIN_RECORDS?.electrodes ?? []);
   }
   return cached;
 }

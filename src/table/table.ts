@@ -231,10 +231,8 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
   const keyOf = (r: unknown): string => (isObject(r) && typeof r.key === 'string' ? r.key : '');
 
   const couples: CoupleRow[] = [];
-  const coupleIndex = new Map<string, CoupleRow>();
+  const coupleKeys: string[] = [];
   const coupleRowAt = new Map<string, number>();
-  // A text whose signature no key has is no key: it is refused without reading its species.
-  const coupleSignatures = new Set<number>();
   coupleRecords.forEach((rec, index) => {
     const v = validateCoupleRecord(rec);
     if (v.row === undefined) {
@@ -248,13 +246,12 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
       return;
     }
     coupleRowAt.set(k, index);
-    coupleIndex.set(k, v.row);
-    coupleSignatures.add(coupleKeySignature(v.row.key));
+    coupleKeys.push(k);
     couples.push(v.row);
   });
 
   const electrodes: ElectrodeRow[] = [];
-  const electrodeIndex = new Map<string, ElectrodeRow>();
+  const electrodeNames: string[][] = [];
   const electrodeRowAt = new Map<string, number>();
   electrodeRecords.forEach((rec, index) => {
     const v = validateElectrodeRecord(rec);
@@ -273,16 +270,51 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
       });
       return;
     }
-    for (const n of names) {
-      electrodeRowAt.set(n, index);
-      electrodeIndex.set(n, v.row);
-    }
+    for (const n of names) electrodeRowAt.set(n, index);
+    electrodeNames.push(names);
     electrodes.push(v.row);
+  });
+
+  return { table: assembleTable({ version, couples, coupleKeys, electrodes, electrodeNames }), problems };
+}
+
+/**
+ * The checked rows of a table with their look-up keys: each couple's normalized key
+ * (normalizeCoupleKey) and each electrode's normalized names (normalizeElectrodeKey of its key and
+ * aliases, without repeats), in row order. What buildTable hands to assembleTable.
+ */
+export interface CheckedRows {
+  readonly version: string;
+  readonly couples: CoupleRow[];
+  readonly coupleKeys: readonly string[];
+  readonly electrodes: ElectrodeRow[];
+  readonly electrodeNames: readonly (readonly string[])[];
+}
+
+/**
+ * The table over rows already checked (by buildTable, or at build time for the built-in table, see
+ * src/table/prebuilt.ts): the look-up maps and functions. Freezes the row lists.
+ *
+ * Syntax: assembleTable({ version, couples, coupleKeys, electrodes, electrodeNames })
+ * See also: buildTable
+ */
+export function assembleTable(rows: CheckedRows): PotentialTable {
+  const { version, couples, coupleKeys, electrodes, electrodeNames } = rows;
+  const coupleIndex = new Map<string, CoupleRow>();
+  // A text whose signature no key has is no key: it is refused without reading its species.
+  const coupleSignatures = new Set<number>();
+  couples.forEach((row, i) => {
+    coupleIndex.set(coupleKeys[i], row);
+    coupleSignatures.add(coupleKeySignature(row.key));
+  });
+  const electrodeIndex = new Map<string, ElectrodeRow>();
+  electrodes.forEach((row, i) => {
+    for (const n of electrodeNames[i]) electrodeIndex.set(n, row);
   });
 
   Object.freeze(couples);
   Object.freeze(electrodes);
-  const table: PotentialTable = {
+  return {
     version,
     couples,
     electrodes,
@@ -295,5 +327,4 @@ export function buildTable(version: string, coupleRecords: readonly unknown[], e
       return electrodeIndex.get(normalizeElectrodeKey(key));
     },
   };
-  return { table, problems };
 }
