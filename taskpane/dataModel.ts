@@ -10,7 +10,7 @@
 import { builtinPartChecksums, partChecksum } from '../src/dataset/checksum';
 import { type DataSetDescription, type PartComparison, type TablePart, compareDataParts, describeDataSet } from '../src/dataset/describe';
 import { BUILTIN_PARTS, DATASET_VERSION } from '../src/dataset/parts';
-import { type PinnedData, partsWithPinned, writePinnedText } from '../src/dataset/pinned';
+import { type PinnedData, storedPartsWithPinned, writePinnedText } from '../src/dataset/pinned';
 import type { CellwrightFunctionsHost } from '../workbook/channel';
 import { type PinnedState, type PinnedWriteOutcome, interpretPinned, readPinnedValue, recordComputedWithData, replacePinnedValue } from '../workbook/pinnedData';
 import { computedWithOf, recalculateAll } from '../workbook/store';
@@ -50,7 +50,7 @@ export class PinnedDataModel {
   notice(): DataNotice | null {
     const p = this.pinned;
     if (p === null) return null;
-    const changes = compareDataParts(partsWithPinned(p), BUILTIN_PARTS);
+    const changes = compareDataParts(storedPartsWithPinned(p), BUILTIN_PARTS);
     if (changes.length === 0) return null;
     return { pinnedVersion: p.version, builtinVersion: DATASET_VERSION, addinIsNewer: compareVersions(DATASET_VERSION, p.version) > 0, changes };
   }

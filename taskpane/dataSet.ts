@@ -79,6 +79,9 @@ function partItem(p: PartDescription): HTMLElement {
     h('p', {}, h('strong', {}, p.title), ' ', h('span', { class: p.pinned ? 'tag pinned' : 'tag builtin' }, p.pinned ? 'pinned' : 'built-in')),
     h('p', { class: 'hint' }, `Version ${p.version}`, p.rows === null ? '' : ` · ${plural(p.rows, 'row')}`, ' · ', checksumCell(p.checksum, `the checksum of ${p.title.toLowerCase()}`)),
     p.name === 'table' ? null : h('p', { class: 'hint source' }, `Read-only. Source: ${p.source}`),
+    p.fromBuiltin === undefined || p.fromBuiltin.length === 0
+      ? null
+      : h('p', { class: 'hint' }, `Pinned by an earlier add-in version, before these fields existed; they are read from this add-in’s built-in data until you update the pinned data: ${p.fromBuiltin.slice(0, 5).join(', ')}${p.fromBuiltin.length > 5 ? ` and ${p.fromBuiltin.length - 5} more` : ''}.`),
   );
 }
 

@@ -22,6 +22,8 @@ export interface PartDescription {
   readonly source: string;
   /** Where the built-in part comes from in the add-in. */
   readonly file: string;
+  /** For a pinned part written by an earlier add-in version: the fields it predates, read from the built-in part. */
+  readonly fromBuiltin?: readonly string[];
 }
 
 export interface DataSetDescription {
@@ -81,6 +83,7 @@ export function describeDataSet(table: TablePart, pinned: PinnedData | null): Da
       rows: rowsOfPart(name, content),
       source: sourceOf(content),
       file: PART_INFO[name].file,
+      ...(own !== undefined && pinned?.fromBuiltin[name] !== undefined ? { fromBuiltin: pinned.fromBuiltin[name] } : {}),
     });
   }
   // The built-in data (or a pinned copy equal to it) has the checksum the build computed.

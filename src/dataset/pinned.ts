@@ -37,8 +37,17 @@ export interface PinnedData {
   readonly pinnedAt: string;
   /** Over the per-part checksums of the parts held. */
   readonly checksum: string;
+  /** The parts as stored (what the checksums cover and what an update compares). */
   readonly parts: Partial<DataParts>;
   readonly checksums: Partial<Record<DataPartName, string>>;
+  /**
+   * The parts as the functions read them: as stored, plus any field that this add-in's built-in part
+   * has and the stored part predates (data pinned by an earlier add-in version), taken from the
+   * built-in part. Such fields are listed in `fromBuiltin`.
+   */
+  readonly inUse: Partial<DataParts>;
+  /** Per part, the fields (paths) taken from the built-in part because the pinned part predates them. */
+  readonly fromBuiltin: Partial<Record<DataPartName, readonly string[]>>;
 }
 
 export interface PinnedProblem {
@@ -185,6 +194,8 @@ function readUncached(text: unknown): PinnedRead {
   if (names.length === 0) return fail('damaged', 'the pinned data holds no part');
   const parts: Partial<Record<DataPartName, unknown>> = {};
   const checksums: Partial<Record<DataPartName, string>> = {};
+  const inUse: Partial<Record<DataPartName, unknown>> = {};
+  const fromBuiltin: Partial<Record<DataPartName, readonly string[]>> = {};
   for (const name of DATA_PARTS) {
     if (!(name in rawParts)) continue;
     const entry = rawParts[name];
@@ -192,25 +203,69 @@ function readUncached(text: unknown): PinnedRead {
     if (!isRecord(entry) || Object.keys(entry).length !== 2 || !isSum(entry.checksum) || !('content' in entry)) {
       return fail('damaged', `the pinned data is damaged: the part "${title}" is not { checksum, content }`);
     }
-    const shape = shapeProblems(entry.content, builtinShape(name), name);
+    const added: string[] = [];
+    const content = withFieldsFrom(entry.content, BUILTIN_PARTS[name], name, added);
+    const shape = shapeProblems(content, builtinShape(name), name);
     if (shape.length > 0) return fail('damaged', `the pinned part "${title}" is damaged or was written by another add-in version: ${shape[0]}`, shape);
     const sum = partChecksum(entry.content);
     if (sum !== entry.checksum) {
       return fail('checksum', `the checksum of the pinned part "${title}" does not match its content: it was changed outside Cellwright or damaged`, [`stored checksum ${entry.checksum}`, `checksum of the content ${sum}`]);
     }
-    const rules = ruleProblems(name, entry.content);
+    const rules = ruleProblems(name, content);
     if (rules.length > 0) return fail('damaged', `the pinned part "${title}" cannot be used: ${rules[0]}`, rules);
     parts[name] = entry.content;
+    inUse[name] = content;
+    if (added.length > 0) fromBuiltin[name] = added;
     checksums[name] = sum;
   }
   const overall = pinnedChecksum(checksums);
   if (overall !== doc.checksum) {
     return fail('checksum', 'the checksum of the pinned data does not match its parts: a part was added, removed or replaced outside Cellwright', [`stored checksum ${String(doc.checksum)}`, `checksum of the parts ${overall}`]);
   }
-  return { ok: true, pinned: { version: doc.version as string, pinnedAt: doc.pinnedAt as string, checksum: overall, parts: parts as Partial<DataParts>, checksums } };
+  return {
+    ok: true,
+    pinned: { version: doc.version as string, pinnedAt: doc.pinnedAt as string, checksum: overall, parts: parts as Partial<DataParts>, checksums, inUse: inUse as Partial<DataParts>, fromBuiltin },
+  };
 }
 
-/** The parts in use with a pinned data set: the pinned ones, the built-in ones for parts it does not hold. */
+const isPlainRecord = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v);
+
+/**
+ * `stored` with every field of a record that `builtin` has and `stored` lacks copied from `builtin`
+ * (records only, recursively; lists are never merged: a row is pinned whole or not at all). The
+ * paths copied are appended to `added`. A pinned part written by an earlier add-in version thus
+ * keeps every value it holds and gains only what it predates. Returns `stored` itself when nothing
+ * is missing.
+ */
+function withFieldsFrom(stored: unknown, builtin: unknown, path: string, added: string[]): unknown {
+  if (!isPlainRecord(stored) || !isPlainRecord(builtin)) return stored;
+  let out: Record<string, unknown> | null = null;
+  for (const [k, b] of Object.entries(builtin)) {
+    const here = `${path}.${k}`;
+    if (!Object.prototype.hasOwnProperty.call(stored, k)) {
+      out ??= { ...stored };
+      out[k] = JSON.parse(JSON.stringify(b)) as unknown;
+      added.push(here);
+    } else {
+      const merged = withFieldsFrom(stored[k], b, here, added);
+      if (merged !== stored[k]) {
+        out ??= { ...stored };
+        out[k] = merged;
+      }
+    }
+  }
+  return out ?? stored;
+}
+
+/**
+ * The parts in use with a pinned data set: the pinned ones (with any field they predate taken from
+ * the built-in part, see PinnedData.inUse), the built-in ones for parts it does not hold.
+ */
 export function partsWithPinned(pinned: PinnedData): DataParts {
+  return { ...BUILTIN_PARTS, ...pinned.inUse };
+}
+
+/** The parts with a pinned data set as stored (the built-in ones for parts it does not hold): what an update would change. */
+export function storedPartsWithPinned(pinned: PinnedData): DataParts {
   return { ...BUILTIN_PARTS, ...pinned.parts };
 }

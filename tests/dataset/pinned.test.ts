@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { builtinPartChecksums, dataSetChecksum, partChecksum } from '../../src/dataset/checksum';
 import { compareDataParts, comparePart, describeDataSet } from '../../src/dataset/describe';
 import { BUILTIN_PARTS, DATASET_VERSION, DATA_PARTS, type DataParts } from '../../src/dataset/parts';
-import { forgetLastPinnedRead, partsWithPinned, readPinnedText, writePinnedText } from '../../src/dataset/pinned';
+import { forgetLastPinnedRead, partsWithPinned, readPinnedText, storedPartsWithPinned, writePinnedText } from '../../src/dataset/pinned';
 import { sha256Hex } from '../../src/store/sha256';
 
 const AT = '2026-01-05T10:00:00.000Z';
@@ -74,6 +74,31 @@ describe('pinned data: stored form', () => {
       if (!r.ok) expect(r.problem.message).toMatch(message);
     });
   }
+
+  it('reads data pinned by an earlier add-in version that predates a field: that field from the built-in part, the rest as pinned', () => {
+    // An earlier version had no sulfuric-acid conductivity and an older nickel weight; its checksums fit its own content.
+    const el = clone(BUILTIN_PARTS.electrolysis) as unknown as { conductivity: Record<string, unknown> };
+    delete el.conductivity.H2SO4;
+    const aw = clone(BUILTIN_PARTS.atomicweights);
+    aw.elements.find((e) => e.symbol === 'Ni')!.atomicWeight = 58.6934;
+    const older = { electrolysis: el as unknown as DataParts['electrolysis'], atomicweights: aw };
+    const r = readPinnedText(writePinnedText({ version: '2025.1', pinnedAt: AT, parts: older }));
+    if (!r.ok) throw new Error(r.problem.message);
+    expect(r.pinned.fromBuiltin).toEqual({ electrolysis: ['electrolysis.conductivity.H2SO4'] });
+    // stored as pinned: the checksum covers what was pinned, and an update would add the field
+    expect(r.pinned.parts.electrolysis).toEqual(el);
+    expect(r.pinned.checksums.electrolysis).toBe(partChecksum(el));
+    // in use: the pinned values, plus the field they predate
+    const inUse = partsWithPinned(r.pinned);
+    expect(inUse.electrolysis.conductivity.H2SO4).toEqual(BUILTIN_PARTS.electrolysis.conductivity.H2SO4);
+    expect(inUse.electrolysis.conductivity.KOH).toEqual(BUILTIN_PARTS.electrolysis.conductivity.KOH);
+    expect(inUse.atomicweights.elements.find((e) => e.symbol === 'Ni')!.atomicWeight).toBe(58.6934);
+    const change = compareDataParts(storedPartsWithPinned(r.pinned), BUILTIN_PARTS).find((c) => c.name === 'electrolysis');
+    expect(change?.changed.some((c) => c.where.startsWith('conductivity.H2SO4') && c.before === undefined)).toBe(true);
+    const described = describeDataSet({ pinned: false, version: DATASET_VERSION, checksum: 'sha256:x', rows: 1, source: 's' }, r.pinned);
+    expect(described.parts.find((p) => p.name === 'electrolysis')?.fromBuiltin).toEqual(['electrolysis.conductivity.H2SO4']);
+    expect(described.parts.find((p) => p.name === 'atomicweights')?.fromBuiltin).toBeUndefined();
+  });
 
   it('refuses a resealed part that breaks the part\'s own rules', () => {
     const r = readPinnedText(pinnedWithNickel(-1));

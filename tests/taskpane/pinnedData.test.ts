@@ -120,6 +120,23 @@ describe('pinned data in the functions runtime', () => {
     expect(file.settings.get(COMPUTED_WITH_KEY)).toBe('unreadable');
   });
 
+  it('data pinned by an earlier add-in version that predates a field: the pinned values hold, the new field comes from the built-in data', async () => {
+    const el = JSON.parse(JSON.stringify(BUILTIN_PARTS.electrolysis)) as { conductivity: Record<string, unknown> };
+    delete el.conductivity.H2SO4;
+    const aw = JSON.parse(JSON.stringify(BUILTIN_PARTS.atomicweights)) as typeof atomicWeights;
+    aw.elements.find((e) => e.symbol === 'Ni')!.atomicWeight = NI_CHANGED;
+    const older = writePinnedText({ version: '2025.1', pinnedAt: '2025-06-01T00:00:00.000Z', parts: { ...BUILTIN_PARTS, atomicweights: aw, electrolysis: el as unknown as typeof BUILTIN_PARTS.electrolysis } });
+    const file = new WorkbookFile({ [PINNED_DATA_KEY]: older });
+    const fns = await open(file);
+    expect(await plate(fns)).toBeCloseTo(plateMinutes(NI_CHANGED), 9);
+    const electrolysis = await import('../../functions/families/electrolysis');
+    const kappa = await first((electrolysis.CONDUCTIVITY as unknown as Fn)([['H2SO4']], [[2]], [[25]]));
+    // Gu, Wang & Liaw (1997): κ = c·exp(6.23 − 1.34e-4·c − 1.61e-8·c²)·1e-4 S/m, c in mol/m³
+    expect(kappa).toBeCloseTo(2000 * Math.exp(6.23 - 1.34e-4 * 2000 - 1.61e-8 * 2000 ** 2) * 1e-4, 9);
+    expect(globalThis.cellwrightFunctionsHost!.status().state).not.toBe('unreadable');
+    expect(file.settings.get(PINNED_DATA_KEY)).toBe(older);
+  });
+
   it('pinned data handed over by the pane, or changed elsewhere, is used at once', async () => {
     const file = new WorkbookFile();
     const fns = await open(file);
