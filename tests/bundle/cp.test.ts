@@ -24,7 +24,7 @@ describe('PROTECTIONCRITERION and SOURCE', () => {
     const limit = one(await call('PROTECTIONCRITERION', 'Ag/AgCl/seawater', 'limit')); // ISO 15589-2 §5.2, not read: not held
     expect(isError(limit, '#N/A')).toBe(true);
     expect(msg(limit)).toMatch(/ISO 15589-2/);
-    // ISO 15589-1 as quoted in World Pipelines Aug 2015 p. 118 (−950 mV with active MIC) and KFUPM notes §5.6: −0.95 V CSE
+    // ISO 15589-1 as quoted in World Pipelines Aug 2015 p. 118 (−950 mV with active MIC): −0.95 V CSE
     expect(one(await call('PROTECTIONCRITERION', 'CSE', 'anaerobic'))).toBe(-0.95);
     const srb = one(await call('PROTECTIONCRITERION', 'Ag/AgCl/seawater', 'anaerobic')); // DNV-RP-B401 / ISO 15589-2 sediments: not read
     expect(isError(srb, '#N/A')).toBe(true);

@@ -61,7 +61,7 @@ describe('protectionCriterion: criteria as the standards state them, per electro
   });
   it('anaerobic soil with sulfate-reducing bacteria: −0.95 V CSE (ISO 15589-1 as quoted), 100 mV beyond −0.85 V', () => {
     // World Pipelines Aug 2015 p. 118: ISO "polarised potential criterion of -950 mV (additional 100 mV of polarisation) in the
-    // presence of active MIC"; KFUPM course notes §5.6 item 3: "-0.95 volts with respect to a Cu-CuSO4 electrode … sulphate reducing bacteria"
+    // presence of active MIC"
     const r = protectionCriterion('CSE', 'SRB');
     expect(r.value).toBe(-0.95);
     expect(r.kind).toBe('potential');
