@@ -728,25 +728,11 @@ async function coldStore() {
   const { pinnedCopy } = requireTs('src/store/copy.ts');
   const { recordsOf } = requireTs('src/store/rows.ts');
   const { writeStoredText } = requireTs('src/store/stored.ts');
-  const { EMPTY_LOG, appendEntry } = requireTs('src/store/log.ts');
+  const { typicalEditLog } = requireTs('tests/store/fixtures.ts');
   const { builtinTable } = requireTs('src/table/builtin.ts');
   const pinned = pinnedCopy(recordsOf(builtinTable()));
   const extra = syntheticRecords(2000);
-  let log = EMPTY_LOG;
-  const entries = Number(process.env.CELLWRIGHT_BENCH_LOG_ENTRIES ?? 500);
-  for (let i = 0; i < entries; i++) {
-    const r = extra[(i * 37) % extra.length];
-    log = appendEntry(log, {
-      revision: i + 1,
-      at: new Date(Date.UTC(2026, 0, 1) + i * 3_600_000).toISOString(),
-      by: i % 3 === 0 ? 'Q. Engineer' : 'P. Operator',
-      why: `re-measured on plating line ${(i % 7) + 1} after the monthly calibration check`,
-      action: 'edit',
-      basedOn: pinned.basedOn,
-      rows: [{ table: 'couples', key: r.key, change: 'changed', fields: [{ field: 'e0', from: r.e0, to: r.e0 + 0.001 }, { field: 'source', from: r.source, to: `Plant QA measurement ${i + 1}` }] }],
-      moreRows: 0,
-    });
-  }
+  const log = typicalEditLog(extra, Number(process.env.CELLWRIGHT_BENCH_LOG_ENTRIES ?? 500), pinned.basedOn);
   const copy = {
     ...pinned,
     revision: 500,

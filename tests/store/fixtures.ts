@@ -5,6 +5,7 @@
 import { builtinTable } from '../../src/table/builtin';
 import type { CoupleRecord, ElectrodeRecord } from '../../src/table/records';
 import { type VersionedRecords, recordsOf } from '../../src/store/rows';
+import { EMPTY_LOG, type RevisionLog, appendEntry } from '../../src/store/log';
 
 export function builtin(): VersionedRecords {
   return recordsOf(builtinTable());
@@ -44,4 +45,27 @@ export function someElectrodes(): ElectrodeRecord[] {
     { key: 'Test-SCE', aliases: ['test calomel'], potential: 0.2412, dEdT_mV_K: -0.66, source: 'test data' },
     { key: 'Test-AgCl-3M', aliases: [], potential: 0.210, source: 'test data' },
   ];
+}
+
+/**
+ * A revision log of `entries` typical edits (also built by `npm run bench`'s cold-store case): each
+ * changes one row's E° by 1 mV and its source, by one of two people, with a reason of about 60
+ * characters, an hour apart from 2026-01-01.
+ */
+export function typicalEditLog(rows: readonly Pick<CoupleRecord, 'key' | 'e0' | 'source'>[], entries: number, basedOn: string): RevisionLog {
+  let log = EMPTY_LOG;
+  for (let i = 0; i < entries; i++) {
+    const r = rows[(i * 37) % rows.length];
+    log = appendEntry(log, {
+      revision: i + 1,
+      at: new Date(Date.UTC(2026, 0, 1) + i * 3_600_000).toISOString(),
+      by: i % 3 === 0 ? 'Q. Engineer' : 'P. Operator',
+      why: `re-measured on plating line ${(i % 7) + 1} after the monthly calibration check`,
+      action: 'edit',
+      basedOn,
+      rows: [{ table: 'couples', key: r.key, change: 'changed', fields: [{ field: 'e0', from: r.e0, to: r.e0 + 0.001 }, { field: 'source', from: r.source, to: `Plant QA measurement ${i + 1}` }] }],
+      moreRows: 0,
+    });
+  }
+  return log;
 }

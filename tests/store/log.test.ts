@@ -23,7 +23,7 @@ import {
 } from '../../src/store/log';
 import { contentChecksum, forgetLastRead, readStoredText, writeStoredText } from '../../src/store/stored';
 import { MAX_REASON_CHARS } from '../../src/textLimits';
-import { builtin, manyCouples } from './fixtures';
+import { builtin, manyCouples, typicalEditLog } from './fixtures';
 
 const B = builtin();
 const AT = '2026-12-02T08:00:00.000Z';
@@ -228,21 +228,8 @@ describe('revision log: size and read time with 2,000 user rows and 500 entries'
   it('stores within the limit and reads (checksums, every row and every entry checked) in a measured time', () => {
     const rows = manyCouples(2000);
     const copy = applyChange(pinned(), B, { kind: 'import', mode: 'merge', couples: rows, electrodes: [] });
-    let log = EMPTY_LOG;
     // Each entry a typical edit: one row's E° and source changed, a reason of about 60 characters.
-    for (let i = 0; i < 500; i++) {
-      const r = rows[(i * 37) % rows.length];
-      log = appendEntry(log, {
-        revision: i + 1,
-        at: new Date(Date.UTC(2026, 0, 1) + i * 3_600_000).toISOString(),
-        by: i % 3 === 0 ? 'Q. Engineer' : 'P. Operator',
-        why: `re-measured on plating line ${(i % 7) + 1} after the monthly calibration check`,
-        action: 'edit',
-        basedOn: B.version,
-        rows: [{ table: 'couples', key: r.key, change: 'changed', fields: [{ field: 'e0', from: r.e0, to: r.e0 + 0.001 }, { field: 'source', from: r.source, to: `Plant QA measurement ${i + 1}` }] }],
-        moreRows: 0,
-      });
-    }
+    const log = typicalEditLog(rows, 500, B.version);
     expect(log.entries.length).toBe(500);
     const text = writeStoredText({ ...copy, revision: 500, changedAt: AT, log });
     const logChars = JSON.stringify(log).length;
