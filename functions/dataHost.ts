@@ -7,7 +7,7 @@
  * function answers from a mix of pinned and built-in data. Nothing here writes to the workbook.
  */
 import { useDataParts } from '../src/dataset/active';
-import { builtinPartChecksums, builtinPartsChecksum, partChecksum, partsChecksum } from '../src/dataset/checksum';
+import { builtinPartChecksums, builtinPartsChecksum, partsChecksum } from '../src/dataset/checksum';
 import { type DataSetDescription, type TablePart, describeDataSet } from '../src/dataset/describe';
 import { DATA_PARTS, type DataPartName } from '../src/dataset/parts';
 import { type PinnedData, partsWithPinned, readPinnedText } from '../src/dataset/pinned';
@@ -76,10 +76,9 @@ export function dataPartsChecksum(): string {
   if (pinned === null) return builtinPartsChecksum();
   const sums = {} as Record<DataPartName, string>;
   const builtin = builtinPartChecksums();
-  // A pinned part that predates fields of this add-in's built-in part is used with those fields filled in
-  // from the built-in part: its checksum here covers what is in use, so a later built-in change to them
-  // recalculates the workbook like any built-in change.
-  for (const p of DATA_PARTS) sums[p] = pinned.fromBuiltin[p] !== undefined ? partChecksum(pinned.inUse[p]) : (pinned.checksums[p] ?? builtin[p]);
+  // Checksums of what is in use: a pinned part that predates fields of the built-in part is read with them,
+  // so a later built-in change to those fields recalculates the workbook like any built-in change.
+  for (const p of DATA_PARTS) sums[p] = pinned.inUseChecksums[p] ?? builtin[p];
   return partsChecksum(sums);
 }
 

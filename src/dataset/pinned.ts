@@ -48,6 +48,8 @@ export interface PinnedData {
   readonly inUse: Partial<DataParts>;
   /** Per part, the fields (paths) taken from the built-in part because the pinned part predates them. */
   readonly fromBuiltin: Partial<Record<DataPartName, readonly string[]>>;
+  /** Checksums of the parts as the functions read them: `checksums`, except for parts with fields from the built-in part. */
+  readonly inUseChecksums: Partial<Record<DataPartName, string>>;
 }
 
 export interface PinnedProblem {
@@ -196,6 +198,7 @@ function readUncached(text: unknown): PinnedRead {
   const checksums: Partial<Record<DataPartName, string>> = {};
   const inUse: Partial<Record<DataPartName, unknown>> = {};
   const fromBuiltin: Partial<Record<DataPartName, readonly string[]>> = {};
+  const inUseChecksums: Partial<Record<DataPartName, string>> = {};
   for (const name of DATA_PARTS) {
     if (!(name in rawParts)) continue;
     const entry = rawParts[name];
@@ -217,6 +220,7 @@ function readUncached(text: unknown): PinnedRead {
     inUse[name] = content;
     if (added.length > 0) fromBuiltin[name] = added;
     checksums[name] = sum;
+    inUseChecksums[name] = added.length > 0 ? partChecksum(content) : sum;
   }
   const overall = pinnedChecksum(checksums);
   if (overall !== doc.checksum) {
@@ -224,7 +228,7 @@ function readUncached(text: unknown): PinnedRead {
   }
   return {
     ok: true,
-    pinned: { version: doc.version as string, pinnedAt: doc.pinnedAt as string, checksum: overall, parts: parts as Partial<DataParts>, checksums, inUse: inUse as Partial<DataParts>, fromBuiltin },
+    pinned: { version: doc.version as string, pinnedAt: doc.pinnedAt as string, checksum: overall, parts: parts as Partial<DataParts>, checksums, inUse: inUse as Partial<DataParts>, fromBuiltin, inUseChecksums },
   };
 }
 

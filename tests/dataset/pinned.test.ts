@@ -88,6 +88,9 @@ describe('pinned data: stored form', () => {
     // stored as pinned: the checksum covers what was pinned, and an update would add the field
     expect(r.pinned.parts.electrolysis).toEqual(el);
     expect(r.pinned.checksums.electrolysis).toBe(partChecksum(el));
+    // what the functions read has its own checksum (the computed-with record); parts read as pinned keep theirs
+    expect(r.pinned.inUseChecksums.electrolysis).toBe(partChecksum(BUILTIN_PARTS.electrolysis));
+    expect(r.pinned.inUseChecksums.atomicweights).toBe(r.pinned.checksums.atomicweights);
     // in use: the pinned values, plus the field they predate
     const inUse = partsWithPinned(r.pinned);
     expect(inUse.electrolysis.conductivity.H2SO4).toEqual(BUILTIN_PARTS.electrolysis.conductivity.H2SO4);
