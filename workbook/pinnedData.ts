@@ -7,7 +7,7 @@
  * that cannot be read is never written over except by an explicit reset naming it.
  */
 import { type PinnedProblem, type PinnedRead, readPinnedText } from '../src/dataset/pinned';
-import { readSetting, replaceSetting } from './settings';
+import { type SettingState, readSetting, replaceSetting } from './settings';
 
 /** The settings key of the pinned data. */
 export const PINNED_DATA_KEY = 'cellwright.pinnedData';
@@ -18,10 +18,7 @@ export const PINNED_DATA_KEY = 'cellwright.pinnedData';
  */
 export const COMPUTED_WITH_DATA_KEY = 'cellwright.computedWithData';
 
-export type PinnedState =
-  | { readonly kind: 'none'; readonly raw: null }
-  | { readonly kind: 'readable'; readonly raw: string; readonly read: Extract<PinnedRead, { ok: true }> }
-  | { readonly kind: 'unreadable'; readonly raw: unknown; readonly problem: PinnedProblem };
+export type PinnedState = SettingState<Extract<PinnedRead, { ok: true }>, PinnedProblem>;
 
 /** Reads the pinned-data value (null when the workbook has none). */
 export async function readPinnedValue(): Promise<unknown> {

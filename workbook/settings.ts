@@ -27,6 +27,16 @@ export function sameStoredValue(a: unknown, b: unknown): boolean {
 }
 
 /**
+ * What the workbook holds under a settings key: nothing, a value its reader accepts (`read`, the
+ * reader's successful result), or a value it refuses (`problem`). `raw` is the stored value exactly as
+ * read (for compare-and-replace and export).
+ */
+export type SettingState<Read, Problem> =
+  | { readonly kind: 'none'; readonly raw: null }
+  | { readonly kind: 'readable'; readonly raw: string; readonly read: Read }
+  | { readonly kind: 'unreadable'; readonly raw: unknown; readonly problem: Problem };
+
+/**
  * What a compare-and-replace found: `conflict` (nothing written; `value` is what the workbook holds),
  * `written` (written and read back unchanged) or `overwritten` (written, but another writer replaced
  * it at the same moment; `value` is what the workbook holds now).

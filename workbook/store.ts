@@ -17,7 +17,7 @@ import { ChangeError, type WorkbookCopy } from '../src/store/copy';
 import { type LogAction, type Signoff, EMPTY_LOG, appendEntry, logEntry, signoffProblem } from '../src/store/log';
 import type { VersionedRecords } from '../src/store/rows';
 import { type StoredProblem, type StoredRead, readStoredText, writeStoredText } from '../src/store/stored';
-import { readSetting, replaceSetting } from './settings';
+import { type SettingState, readSetting, replaceSetting } from './settings';
 
 /** The settings key of the stored table. */
 export const TABLE_SETTING_KEY = 'cellwright.potentialTable';
@@ -42,11 +42,8 @@ export async function readComputedWith(): Promise<string | null> {
   return typeof v === 'string' ? v : null;
 }
 
-/** What the workbook holds. `raw` is the stored value exactly as read (for conflict checks and export). */
-export type StoredState =
-  | { readonly kind: 'none'; readonly raw: null }
-  | { readonly kind: 'readable'; readonly raw: string; readonly read: Extract<StoredRead, { ok: true }> }
-  | { readonly kind: 'unreadable'; readonly raw: unknown; readonly problem: StoredProblem };
+/** What the workbook holds under the table's key. */
+export type StoredState = SettingState<Extract<StoredRead, { ok: true }>, StoredProblem>;
 
 /** Reads the stored value (null when the workbook has none). */
 export async function readStoredValue(): Promise<unknown> {
