@@ -1,5 +1,6 @@
-/* Build: dist/functions.js (self-contained), dist/functions.json (generated from JSDoc),
- * dist/taskpane.html + dist/taskpane.js (one shared runtime: the page loads both bundles),
+/* Build: dist/functions.js, dist/functions.json (generated from JSDoc), dist/taskpane.html +
+ * dist/taskpane.js (one shared runtime: the page loads both bundles), dist/data.js (the reference
+ * data both bundles read: the page loads it once, before them; see "The page's scripts" below),
  * dist/manifest.xml, the icons and the function reference (docs/functions.html, the help links' target).
  * CELLWRIGHT_BASE_URL=https://host/path/ builds for that place instead of https://localhost:3000/
  * (scripts/lib/deployBase.cjs). */
@@ -9,6 +10,7 @@ const CopyWebpackPlugin = require('copy-webpack-plugin');
 const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
 const fs = require('fs');
 const { DeployBasePlugin, deployBase } = require('./scripts/lib/deployBase.cjs');
+const { stripHelpText } = require('./scripts/lib/stripHelpText.cjs');
 
 // Every file in functions/declarations/ declares one family of worksheet functions.
 const declarations = fs
@@ -18,6 +20,15 @@ const declarations = fs
   .map((f) => `./functions/declarations/${f}`);
 
 const BUILD_TIME_MODULE = path.resolve(__dirname, 'src/dataset/buildTime.ts');
+const FAMILIES = path.resolve(__dirname, 'functions/families');
+const SHARED_ARGS = path.resolve(__dirname, 'functions/args.ts');
+const DATA_DIR = path.resolve(__dirname, 'data');
+
+/** True for a module of the reference data: a file of data/ or the values the build computes from it. */
+const isReferenceData = (module) => {
+  const file = module.resource ?? '';
+  return file === BUILD_TIME_MODULE || (path.dirname(file) === DATA_DIR && file.endsWith('.json'));
+};
 
 module.exports = (env, argv) => {
   const production = argv.mode !== 'development';
@@ -28,7 +39,7 @@ module.exports = (env, argv) => {
     devtool: production ? false : 'source-map',
     // Persistent cache (node_modules/.cache/webpack): a second build with unchanged sources, such as the
     // deployable build the tests make after npm test's own, reuses the compiled and minified modules.
-    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs'), require.resolve('./scripts/lib/buildTimeLoader.cjs'), require.resolve('./scripts/lib/buildTime.mjs')] } },
+    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs'), require.resolve('./scripts/lib/buildTimeLoader.cjs'), require.resolve('./scripts/lib/buildTime.mjs'), require.resolve('./scripts/lib/stripHelpText.cjs')] } },
     target: ['web', 'es2020'],
     entry: {
       // One entry module that imports entry.ts and then every declaration, so that webpack joins the
@@ -42,18 +53,43 @@ module.exports = (env, argv) => {
       path: path.resolve(__dirname, 'dist'),
       filename: '[name].js',
       globalObject: 'globalThis',
+      // The array data.js puts its modules in; scripts/lib/bundle.mjs names it too.
+      chunkLoadingGlobal: 'cellwrightChunks',
       clean: true,
     },
     resolve: { extensions: ['.ts', '.js', '.json'] },
     module: {
       rules: [
-        { test: /\.ts$/, loader: 'ts-loader', exclude: [/node_modules/, BUILD_TIME_MODULE], options: { transpileOnly: true } },
+        // The worksheet-function specs without the texts only the generated metadata and reference read
+        // (scripts/lib/stripHelpText.cjs); functions.json and docs/ are generated from the sources.
+        {
+          test: /\.ts$/,
+          include: [FAMILIES, SHARED_ARGS],
+          loader: 'ts-loader',
+          options: { transpileOnly: true, instance: 'specs', getCustomTransformers: () => ({ before: [stripHelpText] }) },
+        },
+        { test: /\.ts$/, loader: 'ts-loader', exclude: [/node_modules/, BUILD_TIME_MODULE, FAMILIES, SHARED_ARGS], options: { transpileOnly: true } },
         // The built-in table checked and the built-in checksums, computed once here instead of at every
         // start (src/dataset/buildTime.ts; BENCHMARKS.md, cold start).
         { test: BUILD_TIME_MODULE, loader: require.resolve('./scripts/lib/buildTimeLoader.cjs'), type: 'javascript/esm' },
       ],
     },
     performance: { hints: false },
+    // The page's scripts: the functions and the pane both read the reference data (data/*.json and the
+    // values the build computes from it). It is one chunk, dist/data.js, that the page loads once before
+    // both bundles (taskpane.html), instead of a copy inside each: functions.js is then under 60 KB
+    // gzipped (BENCHMARKS.md, run J). Each bundle waits for that chunk before it runs (webpack's start-up
+    // does), so without data.js neither starts; scripts/lib/bundle.mjs evaluates data.js first the same
+    // way. The code stays in its bundle, one scope each: only the data moved.
+    optimization: {
+      splitChunks: {
+        cacheGroups: {
+          default: false,
+          defaultVendors: false,
+          data: { test: isReferenceData, name: 'data', chunks: 'initial', enforce: true },
+        },
+      },
+    },
     plugins: [
       new CustomFunctionsMetadataPlugin({ output: 'functions.json', input: declarations }),
       new HtmlWebpackPlugin({

@@ -48,7 +48,7 @@ function newestMtime(dir) {
 }
 
 function ensureBuilt() {
-  const built = ['taskpane.html', 'taskpane.js', 'functions.js', 'taskpane.css'].map((f) => resolve(dist, f));
+  const built = ['taskpane.html', 'taskpane.js', 'data.js', 'functions.js', 'taskpane.css'].map((f) => resolve(dist, f));
   const missing = built.some((f) => !existsSync(f));
   const oldest = missing ? 0 : Math.min(...built.map((f) => statSync(f).mtimeMs));
   const sources = Math.max(...['src', 'functions', 'taskpane', 'data'].map((d) => newestMtime(resolve(root, d))), statSync(resolve(root, 'webpack.config.cjs')).mtimeMs);

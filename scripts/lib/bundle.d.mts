@@ -38,4 +38,8 @@ export interface LoadedBundle {
 }
 
 export declare function ensureBuilt(options?: { quiet?: boolean }): string;
+/** The scripts that make up the functions, in the order the page loads them. */
+export declare const FUNCTION_SCRIPTS: readonly string[];
+/** The array data.js puts its modules in. */
+export declare const CHUNK_GLOBAL: string;
 export declare function loadBundle(extraGlobals?: Record<string, unknown>, distDir?: string, options?: { isolated?: boolean }): LoadedBundle;

@@ -1,5 +1,6 @@
-// Loads the production functions bundle (dist/functions.js + dist/functions.json) the way Excel's
-// runtime does: evaluated with a CustomFunctions global, collecting the functions it associates.
+// Loads the production functions bundle (dist/data.js, dist/functions.js + dist/functions.json) the
+// way Excel's runtime does: the reference data (data.js) then the functions evaluated with a
+// CustomFunctions global, in the order taskpane.html loads them, collecting the functions associated.
 // Calls go by id with every declared parameter passed (null for omitted ones) and an invocation
 // object appended last.
 //
@@ -52,7 +53,7 @@ function newestSource(dirs) {
     }
   };
   for (const d of dirs) walk(resolve(ROOT, d));
-  for (const f of ['webpack.config.cjs', 'package.json', 'scripts/lib/buildTime.mjs', 'scripts/lib/buildTimeLoader.cjs']) {
+  for (const f of ['webpack.config.cjs', 'package.json', 'scripts/lib/buildTime.mjs', 'scripts/lib/buildTimeLoader.cjs', 'scripts/lib/stripHelpText.cjs']) {
     const p = resolve(ROOT, f);
     if (existsSync(p)) newest = Math.max(newest, statSync(p).mtimeMs);
   }
@@ -68,7 +69,7 @@ function newestSource(dirs) {
 export function ensureBuilt({ quiet = false } = {}) {
   const js = resolve(DIST, 'functions.js');
   const json = resolve(DIST, 'functions.json');
-  const present = existsSync(js) && existsSync(json);
+  const present = existsSync(js) && existsSync(json) && existsSync(resolve(DIST, 'data.js'));
   const stale = present && newestSource(['src', 'workbook', 'functions', 'data']) > Math.min(statSync(js).mtimeMs, statSync(json).mtimeMs);
   if (present && !stale) return 'The existing production build in dist/ was used.';
   const why = present ? 'dist/ is older than the sources' : 'dist/ has no functions bundle yet';
@@ -84,17 +85,24 @@ export function ensureBuilt({ quiet = false } = {}) {
   // webpack leaves an output file untouched when its content did not change: mark both as fresh, or
   // every later run would find them older than the sources and build again
   const now = new Date();
-  for (const f of [js, json]) utimesSync(f, now, now);
+  for (const f of [js, json, resolve(DIST, 'data.js')]) utimesSync(f, now, now);
   return present ? 'dist/ was older than the sources, so it was rebuilt.' : 'dist/ had no functions bundle yet, so it was built.';
 }
 
+/** The scripts that make up the functions, in the order the page loads them (taskpane.html): the
+ * reference data both bundles read, then the functions (which wait for the data before they run). */
+export const FUNCTION_SCRIPTS = ['data.js', 'functions.js'];
+
+/** The array data.js puts its modules in (output.chunkLoadingGlobal in webpack.config.cjs). */
+export const CHUNK_GLOBAL = 'cellwrightChunks';
+
 /**
- * Evaluates dist/functions.js with a CustomFunctions global (see above for where) and returns
+ * Evaluates dist/data.js and dist/functions.js with a CustomFunctions global (see above for where) and returns
  * { metadata, registered, byId, sandbox, call(id, ...args) }; `sandbox` holds the globals the
  * bundle was given (in a node:vm context, the context's global object).
  */
 export function loadBundle(extraGlobals = {}, distDir = DIST, { isolated = false } = {}) {
-  const code = readFileSync(resolve(distDir, 'functions.js'), 'utf8');
+  const scripts = FUNCTION_SCRIPTS.map((f) => ({ f, code: readFileSync(resolve(distDir, f), 'utf8') }));
   const metadata = JSON.parse(readFileSync(resolve(distDir, 'functions.json'), 'utf8'));
   const registered = new Map();
   const CustomFunctions = {
@@ -108,10 +116,12 @@ export function loadBundle(extraGlobals = {}, distDir = DIST, { isolated = false
   const sandbox = { CustomFunctions, ...extraGlobals };
   if (isolated || Object.keys(extraGlobals).length > 0) {
     vm.createContext(sandbox);
-    vm.runInContext(code, sandbox, { filename: 'functions.js' });
+    for (const { f, code } of scripts) vm.runInContext(code, sandbox, { filename: f });
   } else {
     globalThis.CustomFunctions = CustomFunctions;
-    vm.runInThisContext(code, { filename: 'functions.js' });
+    // a fresh array for each load, as on a new page: data.js of this load, not an earlier one's
+    delete globalThis[CHUNK_GLOBAL];
+    for (const { f, code } of scripts) vm.runInThisContext(code, { filename: f });
   }
   const byId = new Map(metadata.functions.map((f) => [f.id, f]));
   return {

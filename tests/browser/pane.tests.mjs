@@ -199,7 +199,7 @@ export const tests = [
       for (const d of ["default-src 'self'", "script-src 'self'", "style-src 'self'", "object-src 'none'", "base-uri 'none'"]) assert.ok(page0.csp.includes(d), `CSP lacks ${d}`);
       assert.doesNotMatch(page0.csp, /unsafe|\*/);
       assert.deepEqual({ inline: page0.inlineScripts, styled: page0.styled, handlers: page0.handlers }, { inline: 0, styled: 0, handlers: 0 });
-      assert.deepEqual(page0.scripts, ['/office-js/office.js', '/functions.js', '/taskpane.js']);
+      assert.deepEqual(page0.scripts, ['/office-js/office.js', '/data.js', '/functions.js', '/taskpane.js']);
       await shot(page, '01-built-in-table-in-use');
       await page.click('#tab-about');
       const about = await text(page, '#panel-about');

@@ -1,9 +1,13 @@
 /**
  * The production bundle, loaded as Excel's runtime loads it (a CustomFunctions global): registration,
- * self-containment (evaluated alone in node:vm), and the adapter's rules on the thermodynamics and
- * Nernst families.
+ * self-containment (data.js and functions.js evaluated alone in node:vm), and the adapter's rules on
+ * the thermodynamics and Nernst families.
  */
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import vm from 'node:vm';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { FUNCTION_SCRIPTS } from '../../scripts/lib/bundle.mjs';
 import { DIST, type LoadedBundle, isError, loadBundle, one } from './harness';
 
 let b: LoadedBundle;
@@ -32,6 +36,20 @@ describe('registration', () => {
     const args = [[[0.3419]], [[2]], [[0.01], [1], [100]], null] as const;
     expect(alone.call('NERNST', ...args)).toEqual(b.call('NERNST', ...args));
     expect(one(alone.call('STDPOTENTIAL', 'Cu2+/Cu', null))).toBe(one(b.call('STDPOTENTIAL', 'Cu2+/Cu', null)));
+  });
+  it('the page loads the reference data before the functions, and the loader does the same', () => {
+    const html = readFileSync(resolve(DIST, 'taskpane.html'), 'utf8');
+    const pageScripts = [...html.matchAll(/<script\b[^>]*\bsrc="?([^"\s>]+)/g)].map((m) => m[1]).filter((src) => !src.includes('office-js') && !src.includes('office.js'));
+    expect(pageScripts).toEqual([...FUNCTION_SCRIPTS, 'taskpane.js']);
+  });
+  it('functions.js without data.js registers nothing: it waits for its data, it never answers without it', () => {
+    const registered: string[] = [];
+    const sandbox = { CustomFunctions: { Error: class {}, ErrorCode: {}, associate: (id: string) => registered.push(id) } };
+    vm.createContext(sandbox);
+    vm.runInContext(readFileSync(resolve(DIST, 'functions.js'), 'utf8'), sandbox);
+    expect(registered).toEqual([]);
+    vm.runInContext(readFileSync(resolve(DIST, 'data.js'), 'utf8'), sandbox); // the data arriving late starts it
+    expect(registered.length).toBe(b.metadata.functions.length);
   });
 });
 

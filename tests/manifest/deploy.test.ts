@@ -72,7 +72,7 @@ describe(`npm run build with CELLWRIGHT_BASE_URL=${BASE}`, () => {
   it('has no "localhost" in any file', () => {
     const files = filesUnder(out);
     expect(files.map((f) => f.slice(out.length + 1)).sort()).toEqual(
-      expect.arrayContaining(['manifest.xml', 'functions.js', 'functions.json', 'taskpane.html', 'taskpane.js', 'docs/functions.html', 'icon-16.png']),
+      expect.arrayContaining(['manifest.xml', 'data.js', 'functions.js', 'functions.json', 'taskpane.html', 'taskpane.js', 'docs/functions.html', 'icon-16.png']),
     );
     const offending = files.filter((f) => readFileSync(f).toString('latin1').includes('localhost'));
     expect(offending).toEqual([]);
