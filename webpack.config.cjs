@@ -11,6 +11,7 @@ const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin'
 const fs = require('fs');
 const { DeployBasePlugin, deployBase } = require('./scripts/lib/deployBase.cjs');
 const { stripHelpText } = require('./scripts/lib/stripHelpText.cjs');
+const { EagerModulesPlugin } = require('./scripts/lib/eagerModules.cjs');
 
 // Every file in functions/declarations/ declares one family of worksheet functions.
 const declarations = fs
@@ -39,7 +40,7 @@ module.exports = (env, argv) => {
     devtool: production ? false : 'source-map',
     // Persistent cache (node_modules/.cache/webpack): a second build with unchanged sources, such as the
     // deployable build the tests make after npm test's own, reuses the compiled and minified modules.
-    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs'), require.resolve('./scripts/lib/buildTimeLoader.cjs'), require.resolve('./scripts/lib/buildTime.mjs'), require.resolve('./scripts/lib/stripHelpText.cjs')] } },
+    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs'), require.resolve('./scripts/lib/buildTimeLoader.cjs'), require.resolve('./scripts/lib/buildTime.mjs'), require.resolve('./scripts/lib/stripHelpText.cjs'), require.resolve('./scripts/lib/eagerModules.cjs')] } },
     target: ['web', 'es2020'],
     entry: {
       // One entry module that imports entry.ts and then every declaration, so that webpack joins the
@@ -80,7 +81,8 @@ module.exports = (env, argv) => {
     // both bundles (taskpane.html), instead of a copy inside each: functions.js is then under 60 KB
     // gzipped (BENCHMARKS.md, run J). Each bundle waits for that chunk before it runs (webpack's start-up
     // does), so without data.js neither starts; scripts/lib/bundle.mjs evaluates data.js first the same
-    // way. The code stays in its bundle, one scope each: only the data moved.
+    // way. The code stays in its bundle, one scope each: only the data moved. Waiting puts each bundle's
+    // code in a module function, which EagerModulesPlugin writes so that V8 parses it once, not twice.
     optimization: {
       splitChunks: {
         cacheGroups: {
@@ -109,6 +111,7 @@ module.exports = (env, argv) => {
         ],
       }),
       new DeployBasePlugin(base),
+      ...(production ? [new EagerModulesPlugin(['functions.js', 'taskpane.js'])] : []),
     ],
     devServer: {
       host: 'localhost',

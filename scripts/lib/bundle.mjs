@@ -53,7 +53,7 @@ function newestSource(dirs) {
     }
   };
   for (const d of dirs) walk(resolve(ROOT, d));
-  for (const f of ['webpack.config.cjs', 'package.json', 'scripts/lib/buildTime.mjs', 'scripts/lib/buildTimeLoader.cjs', 'scripts/lib/stripHelpText.cjs']) {
+  for (const f of ['webpack.config.cjs', 'package.json', 'scripts/lib/buildTime.mjs', 'scripts/lib/buildTimeLoader.cjs', 'scripts/lib/stripHelpText.cjs', 'scripts/lib/eagerModules.cjs']) {
     const p = resolve(ROOT, f);
     if (existsSync(p)) newest = Math.max(newest, statSync(p).mtimeMs);
   }
