@@ -119,7 +119,8 @@ module.exports = (env, argv) => {
       hot: false,
       liveReload: false,
       client: false,
-      headers: { 'Access-Control-Allow-Origin': '*' },
+      // no-cache: Excel revalidates the page's scripts, so a rebuild is never run beside a cached older file
+      headers: { 'Access-Control-Allow-Origin': '*', 'Cache-Control': 'no-cache' },
       static: [{ directory: path.resolve(__dirname, 'node_modules/@microsoft/office-js/dist'), publicPath: '/office-js' }],
     },
   };
