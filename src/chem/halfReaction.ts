@@ -479,3 +479,23 @@ export function lnReactionQuotient(hr: HalfReaction, activity: (term: HalfReacti
 export function reactionQuotient(hr: HalfReaction, activity: (term: HalfReactionTerm) => number): number {
   return Math.exp(lnReactionQuotient(hr, activity));
 }
+
+const fixed = new Map<string, HalfReaction>();
+
+/**
+ * A half-reaction written in the add-in's own code or data (an electrode's reaction, water's), read on
+ * its first use and kept: each text is parsed once however often it is asked for. Not for users' text,
+ * which would make the memo grow without bound; parseHalfReaction reads that.
+ *
+ * Syntax: fixedHalfReaction(text)
+ * Example: fixedHalfReaction("AgCl + e- -> Ag + Cl-") === fixedHalfReaction("AgCl + e- -> Ag + Cl-") → true
+ * See also: parseHalfReaction
+ */
+export function fixedHalfReaction(text: string): HalfReaction {
+  let hr = fixed.get(text);
+  if (hr === undefined) {
+    hr = parseHalfReaction(text);
+    fixed.set(text, hr);
+  }
+  return hr;
+}

@@ -1,5 +1,5 @@
 import data from '../../data/electrode-e0.json';
-import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
+import { type HalfReaction, fixedHalfReaction } from '../chem/halfReaction';
 import { FARADAY_C_PER_MOL, kelvin } from '../constants';
 import { NotFoundError } from '../errors';
 import { halfReactionProperties } from '../species/halfReactionProperties';
@@ -19,17 +19,6 @@ interface MeasuredTable {
 }
 
 const ENTRIES = new Map<string, Entry>((data.reactions as readonly Entry[]).map((r) => [r.reaction, r]));
-const parsed = new Map<string, HalfReaction>();
-
-function reactionOf(text: string): HalfReaction {
-  let hr = parsed.get(text);
-  if (hr === undefined) {
-    hr = parseHalfReaction(text);
-    parsed.set(text, hr);
-  }
-  return hr;
-}
-
 /** Linear interpolation in a table whose temperatures are ascending; t within the table. */
 function interpolate(table: MeasuredTable, t: number): number {
   const ts = table.temperature_C;
@@ -75,7 +64,7 @@ export function measuredE0(reaction: HalfReaction, temperatureC: number): number
   const entry = ENTRIES.get(reaction.text);
   if (entry === undefined) return null;
   if (entry.from !== undefined) {
-    const base = reactionOf(entry.from);
+    const base = fixedHalfReaction(entry.from);
     const e0 = measuredE0(base, temperatureC);
     return e0 === null ? null : e0 + cellEmf(reaction, base, temperatureC);
   }

@@ -1,4 +1,4 @@
-import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
+import { type HalfReaction, fixedHalfReaction } from '../chem/halfReaction';
 
 /** Electrodes of the second kind, by the metal/salt part of their key, and the reaction that sets their potential. */
 const KINDS: ReadonlyArray<[RegExp, string]> = [
@@ -7,8 +7,6 @@ const KINDS: ReadonlyArray<[RegExp, string]> = [
   [/^Hg\/HgO\//i, 'HgO + H2O + 2e- -> Hg(l) + 2OH-'],
   [/^Hg\/Hg2SO4\//i, 'Hg2SO4 + 2e- -> 2Hg(l) + SO4^2-'],
 ];
-
-const parsed = new Map<string, HalfReaction>();
 
 /**
  * The reaction that sets the potential of an electrode of the second kind, read from the metal/salt
@@ -26,13 +24,7 @@ export function secondKindReaction(names: readonly string[]): HalfReaction | nul
   for (const name of names) {
     const text = name.trim();
     for (const [re, reaction] of KINDS) {
-      if (!re.test(text)) continue;
-      let hr = parsed.get(reaction);
-      if (hr === undefined) {
-        hr = parseHalfReaction(reaction);
-        parsed.set(reaction, hr);
-      }
-      return hr;
+      if (re.test(text)) return fixedHalfReaction(reaction);
     }
   }
   return null;

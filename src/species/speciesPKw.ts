@@ -1,5 +1,5 @@
 import { LN10, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
-import { type HalfReaction, parseHalfReaction } from '../chem/halfReaction';
+import { type HalfReaction, fixedHalfReaction } from '../chem/halfReaction';
 import { halfReactionProperties } from './halfReactionProperties';
 import { reactionGibbs } from './reactionGibbs';
 
@@ -9,8 +9,7 @@ import { reactionGibbs } from './reactionGibbs';
  * 2H+ + 2e- → H2, whose difference is 2 H2O → 2 H+ + 2 OH-.
  */
 // Read on first use, not when the bundle is evaluated (it is not needed before a pKw is asked for).
-let waterToOH: HalfReaction | null = null;
-const WATER_TO_OH = (): HalfReaction => (waterToOH ??= parseHalfReaction('2H2O + 2e- -> H2 + 2OH-'));
+const WATER_TO_OH = (): HalfReaction => fixedHalfReaction('2H2O + 2e- -> H2 + 2OH-');
 
 /**
  * pKw = −log10 Kw of water at a temperature, from the species table: Kw = exp(−ΔrG°(T)/RT) for

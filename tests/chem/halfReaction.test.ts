@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
+  fixedHalfReaction,
   displaySpecies,
   formatCoefficient,
   formatHalfReaction,
@@ -245,5 +246,19 @@ describe('a charge read from a digit', () => {
     } catch (e) {
       expect((e as Error).message).not.toMatch(/was read as/);
     }
+  });
+});
+
+describe('fixedHalfReaction', () => {
+  it('reads a text once and gives the same object after, equal to what parseHalfReaction reads', () => {
+    const text = 'HgO + H2O + 2e- -> Hg(l) + 2OH-';
+    const first = fixedHalfReaction(text);
+    expect(fixedHalfReaction(text)).toBe(first);
+    expect(first).toEqual(parseHalfReaction(text));
+    expect(first.n).toBe(2);
+  });
+  it('throws as parseHalfReaction does for a text that does not balance, and keeps nothing', () => {
+    expect(() => fixedHalfReaction('Cu2+ + e- -> Cu')).toThrow(InputError);
+    expect(() => fixedHalfReaction('Cu2+ + e- -> Cu')).toThrow(InputError);
   });
 });
