@@ -12,6 +12,7 @@ const fs = require('fs');
 const { DeployBasePlugin, deployBase } = require('./scripts/lib/deployBase.cjs');
 const { stripHelpText } = require('./scripts/lib/stripHelpText.cjs');
 const { EagerModulesPlugin } = require('./scripts/lib/eagerModules.cjs');
+const { BUILD_SCRIPTS } = require('./scripts/lib/buildInputs.cjs');
 
 // Every file in functions/declarations/ declares one family of worksheet functions.
 const declarations = fs
@@ -40,7 +41,7 @@ module.exports = (env, argv) => {
     devtool: production ? false : 'source-map',
     // Persistent cache (node_modules/.cache/webpack): a second build with unchanged sources, such as the
     // deployable build the tests make after npm test's own, reuses the compiled and minified modules.
-    cache: { type: 'filesystem', buildDependencies: { config: [__filename, require.resolve('./scripts/lib/deployBase.cjs'), require.resolve('./scripts/lib/buildTimeLoader.cjs'), require.resolve('./scripts/lib/buildTime.mjs'), require.resolve('./scripts/lib/stripHelpText.cjs'), require.resolve('./scripts/lib/eagerModules.cjs')] } },
+    cache: { type: 'filesystem', buildDependencies: { config: [__filename, ...BUILD_SCRIPTS.map((f) => path.resolve(__dirname, f))] } },
     target: ['web', 'es2020'],
     entry: {
       // One entry module that imports entry.ts and then every declaration, so that webpack joins the

@@ -18,10 +18,16 @@ import { existsSync, readFileSync, statSync, readdirSync, utimesSync } from 'nod
 import { spawnSync } from 'node:child_process';
 import { dirname, resolve, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { createRequire } from 'node:module';
 import vm from 'node:vm';
 
 export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
+const { BUILD_SCRIPTS } = createRequire(import.meta.url)('./buildInputs.cjs');
 export const DIST = resolve(ROOT, 'dist');
+
+/** The scripts that make up the functions, in the order the page loads them (taskpane.html): the
+ * reference data both bundles read, then the functions (which wait for the data before they run). */
+export const FUNCTION_SCRIPTS = ['data.js', 'functions.js'];
 
 /** An Excel error value as the bundle makes it (new CustomFunctions.Error(code, message)). */
 export class FakeError {
@@ -53,7 +59,7 @@ function newestSource(dirs) {
     }
   };
   for (const d of dirs) walk(resolve(ROOT, d));
-  for (const f of ['webpack.config.cjs', 'package.json', 'scripts/lib/buildTime.mjs', 'scripts/lib/buildTimeLoader.cjs', 'scripts/lib/stripHelpText.cjs', 'scripts/lib/eagerModules.cjs']) {
+  for (const f of ['webpack.config.cjs', 'package.json', ...BUILD_SCRIPTS]) {
     const p = resolve(ROOT, f);
     if (existsSync(p)) newest = Math.max(newest, statSync(p).mtimeMs);
   }
@@ -67,31 +73,26 @@ function newestSource(dirs) {
  * throws.
  */
 export function ensureBuilt({ quiet = false } = {}) {
-  const js = resolve(DIST, 'functions.js');
-  const json = resolve(DIST, 'functions.json');
-  const present = existsSync(js) && existsSync(json) && existsSync(resolve(DIST, 'data.js'));
-  const stale = present && newestSource(['src', 'workbook', 'functions', 'data']) > Math.min(statSync(js).mtimeMs, statSync(json).mtimeMs);
+  const built = [...FUNCTION_SCRIPTS, 'functions.json'].map((f) => resolve(DIST, f));
+  const present = built.every((f) => existsSync(f));
+  const stale = present && newestSource(['src', 'workbook', 'functions', 'data']) > Math.min(...built.map((f) => statSync(f).mtimeMs));
   if (present && !stale) return 'The existing production build in dist/ was used.';
   const why = present ? 'dist/ is older than the sources' : 'dist/ has no functions bundle yet';
   if (!quiet) process.stderr.write(`Building the functions bundle: ${why} …\n`);
   const webpackCli = resolve(ROOT, 'node_modules/webpack-cli/bin/cli.js');
   const r = spawnSync(process.execPath, [webpackCli, '--mode', 'production'], { cwd: ROOT, encoding: 'utf8' });
-  const ok = r.status === 0 && existsSync(js) && existsSync(json);
+  const ok = r.status === 0 && built.every((f) => existsSync(f));
   if (!ok) {
     const tail = `${r.stdout ?? ''}${r.stderr ?? ''}`.trim().split('\n').slice(-15).join('\n');
     if (!present) throw new Error(`the production build failed, so there is no bundle to run:\n${tail}`);
     return `The rebuild failed (${tail.split('\n').pop()}), so the previous build in dist/ was used.`;
   }
-  // webpack leaves an output file untouched when its content did not change: mark both as fresh, or
+  // webpack leaves an output file untouched when its content did not change: mark them all as fresh, or
   // every later run would find them older than the sources and build again
   const now = new Date();
-  for (const f of [js, json, resolve(DIST, 'data.js')]) utimesSync(f, now, now);
+  for (const f of built) utimesSync(f, now, now);
   return present ? 'dist/ was older than the sources, so it was rebuilt.' : 'dist/ had no functions bundle yet, so it was built.';
 }
-
-/** The scripts that make up the functions, in the order the page loads them (taskpane.html): the
- * reference data both bundles read, then the functions (which wait for the data before they run). */
-export const FUNCTION_SCRIPTS = ['data.js', 'functions.js'];
 
 /** The array data.js puts its modules in (output.chunkLoadingGlobal in webpack.config.cjs). */
 export const CHUNK_GLOBAL = 'cellwrightChunks';
