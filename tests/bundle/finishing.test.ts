@@ -1,13 +1,8 @@
 /** The finishing family through the production bundle: scalars, ranges, omitted arguments and error cells. */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { type FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, isError, messageOf, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-const run = async (id: string, ...args: unknown[]): Promise<unknown> => await b.call(id, ...args);
-const msg = (v: unknown): string => (v as FakeError).message ?? '';
+const { run } = bundleUnderTest();
 
 describe('FREECYANIDE', () => {
   it('salt omitted is NaCN: 12.4 mL of 0.1 mol/L AgNO3 on 10 mL is 12.154 g/L (2 CN⁻ per Ag⁺, IUPAC atomic weights)', async () => {
@@ -20,7 +15,7 @@ describe('FREECYANIDE', () => {
     expect(isError(r[2][0], '#VALUE!')).toBe(true);
     const bad = one(await run('FREECYANIDE', 10, 0.1, 10, 'HCN'));
     expect(isError(bad, '#N/A')).toBe(true);
-    expect(msg(bad)).toMatch(/NaCN.*KCN/);
+    expect(messageOf(bad)).toMatch(/NaCN.*KCN/);
   });
 });
 
@@ -36,7 +31,7 @@ describe('THICKNESSEFFICIENCY', () => {
     expect(isError(one(await run('THICKNESSEFFICIENCY', [[12]], 1, 60, 'NI', 2, 8.908)), '#VALUE!')).toBe(true); // did you mean Ni?
     const zero = one(await run('THICKNESSEFFICIENCY', [[12], [0]], 1, 60, 'Ni', 2, 8.908));
     expect(isError(zero, '#VALUE!')).toBe(true); // a 0 is not averaged in: an empty cell may arrive as 0
-    expect(msg(zero)).toMatch(/readings_um must be > 0/);
+    expect(messageOf(zero)).toMatch(/readings_um must be > 0/);
   });
 });
 
@@ -55,7 +50,7 @@ describe('RECTIFIERSIZE', () => {
     expect(r.map((row) => row[0])).toEqual([480, 240]);
     const bad = (await run('RECTIFIERSIZE', 120, 4, 5.5, 0.5, 20, 0.1, null)) as unknown[][];
     expect(isError(bad[0][0], '#VALUE!')).toBe(true);
-    expect(msg(bad[0][0])).toMatch(/write 20 % as 0.2/);
+    expect(messageOf(bad[0][0])).toMatch(/write 20 % as 0.2/);
   });
 });
 
@@ -70,7 +65,7 @@ describe('H2VENTILATION', () => {
     expect(r[0][0]).toBeCloseTo(2 * r[1][0], 9);
     const bad = (await run('H2VENTILATION', 2000, 95, 0.25, null, null)) as unknown[][];
     expect(isError(bad[0][0], '#VALUE!')).toBe(true);
-    expect(msg(bad[0][0])).toMatch(/95 % as 0.95/);
+    expect(messageOf(bad[0][0])).toMatch(/95 % as 0.95/);
     expect(isError(((await run('H2VENTILATION', 2000, 0.9, 0.25, '25C', null)) as unknown[][])[0][0], '#N/A')).toBe(true);
   });
 });
@@ -99,6 +94,6 @@ describe('COATINGLIFE', () => {
     expect(r[0]).toEqual([5, 10]);
     const bad = one(await run('COATINGLIFE', 12, 0.5, 'uA/cm2', null, null, null));
     expect(isError(bad, '#VALUE!')).toBe(true);
-    expect(msg(bad)).toMatch(/needs species, n and density_g_cm3/);
+    expect(messageOf(bad)).toMatch(/needs species, n and density_g_cm3/);
   });
 });

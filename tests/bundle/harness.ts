@@ -17,6 +17,11 @@ export function one(result: unknown): unknown {
   return result;
 }
 
+/** The message an Excel error value carries ('' for any other value). */
+export function messageOf(v: unknown): string {
+  return v instanceof FakeError ? (v.message ?? '') : '';
+}
+
 /** True when v is an Excel error value, optionally of a given code (e.g. '#N/A'). */
 export function isError(v: unknown, code?: string): v is FakeError {
   return v instanceof FakeError && (code === undefined || v.code === code);

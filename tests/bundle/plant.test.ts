@@ -1,17 +1,13 @@
 /**
- * The production bundle (node:vm, only a CustomFunctions global): the plant family (acid per
+ * The production bundle, loaded as the page loads it: the plant family (acid per
  * tonne, water per H2, degradation rate, gas crossover, power cost) and the concentration
  * overpotentials of the kinetics family, on scalars, ranges, omitted arguments and error cells.
  */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, FakeError, isError, messageOf, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-const call = async (id: string, ...args: unknown[]) => (await b.call(id, ...args)) as unknown[][];
-const msg = (v: unknown) => (v as { message: string }).message;
+const { run } = bundleUnderTest();
+const call = async (id: string, ...args: unknown[]) => (await run(id, ...args)) as unknown[][];
 const F = 96485.33212; // CODATA 2018
 const H2SO4 = 2 * 1.008 + 32.06 + 4 * 15.999; // IUPAC 2021 abridged weights
 const R = 8.314462618; // CODATA 2018
@@ -25,7 +21,7 @@ describe('ACIDPERTONNE', () => {
     expect(one(await call('ACIDPERTONNE', 'Zn', 2, 0.9, 0.01))).toBeCloseTo(((1 + 0.01 / 0.9) * H2SO4) / 65.38, 10);
     const pct = one(await call('ACIDPERTONNE', 'Zn', 2, 90, null));
     expect(isError(pct, '#VALUE!')).toBe(true);
-    expect(msg(pct)).toMatch(/a percentage\? write 90 % as 0.9/);
+    expect(messageOf(pct)).toMatch(/a percentage\? write 90 % as 0.9/);
     expect(isError(one(await call('ACIDPERTONNE', 'NI', 2, null, null)), '#VALUE!')).toBe(true);
   });
 });
@@ -38,7 +34,7 @@ describe('WATERPERH2', () => {
     expect(r[0][0]).toBeCloseTo((1.05 * 0.018015) / vm(0), 10);
     expect(r[0][1]).toBeCloseTo((1.05 * 0.018015) / vm(15), 10);
     expect(isError(one(await call('WATERPERH2', 'litre', null, null)), '#N/A')).toBe(true);
-    expect(msg(one(await call('WATERPERH2', 'kg', 5, null)))).toMatch(/a percentage\? write 5 % as 0.05/);
+    expect(messageOf(one(await call('WATERPERH2', 'kg', 5, null)))).toMatch(/a percentage\? write 5 % as 0.05/);
   });
 });
 
@@ -64,10 +60,10 @@ describe('DEGRADATIONRATE', () => {
     expect(mm[0]).toHaveLength(3); // an error for the whole call fills the row
     const m = mm[0][0];
     expect(isError(m, '#VALUE!')).toBe(true);
-    expect(msg(m)).toMatch(/same size.*got 5 and 4 cells/);
+    expect(messageOf(m)).toMatch(/same size.*got 5 and 4 cells/);
     const few = await call('DEGRADATIONRATE', volts, hours, 10);
     expect(isError(few[0][0], '#VALUE!')).toBe(true);
-    expect(msg(few[0][0])).toMatch(/at least 10/);
+    expect(messageOf(few[0][0])).toMatch(/at least 10/);
     const txt = (await call('DEGRADATIONRATE', [[1.8], ['n/a'], [1.82]], [[0], [1], [2]], null))[0][2];
     expect(isError(txt, '#VALUE!')).toBe(true);
     // an error reading beside an empty hours cell is passed on, not dropped with its partner
@@ -75,7 +71,7 @@ describe('DEGRADATIONRATE', () => {
     expect(isError(na, '#N/A')).toBe(true);
     const two = await call('DEGRADATIONRATE', volts, hours, 2);
     expect(isError(two[0][0], '#VALUE!')).toBe(true);
-    expect(msg(two[0][0])).toMatch(/min_points must be a whole number ≥ 3/);
+    expect(messageOf(two[0][0])).toMatch(/min_points must be a whole number ≥ 3/);
   });
 });
 
@@ -88,14 +84,14 @@ describe('GASCROSSOVER', () => {
     expect(r[1][0]).toBeCloseTo(100 / 5100, 14);
     const row = one(await call('GASCROSSOVER', [[1000, 5000]], 50, null, null, null));
     expect(isError(row, '#VALUE!')).toBe(true);
-    expect(msg(row)).toMatch(/single columns/);
+    expect(messageOf(row)).toMatch(/single columns/);
   });
   it('O2 in H2 from a flux needs its limit; without it #VALUE! saying so', async () => {
     const r = await call('GASCROSSOVER', 5000, 10 / (4 * F), 'O2', 'mol/m2/s', 5);
     expect(r[0][0]).toBeCloseTo(10 / 10010, 10);
     const e = (await call('GASCROSSOVER', 5000, 10, 'O2', null, null))[0][0];
     expect(isError(e, '#VALUE!')).toBe(true);
-    expect(msg(e)).toMatch(/give limit_percent/);
+    expect(messageOf(e)).toMatch(/give limit_percent/);
   });
 });
 
@@ -120,13 +116,13 @@ describe('CONCOVERPOTENTIAL and TAFELCONCOVERPOTENTIAL', () => {
     expect(r[0][0]).toBeCloseTo(((R * 298.15) / (2 * F)) * Math.log(0.75), 12);
     expect(r[1][0]).toBeCloseTo(((R * 298.15) / (2 * F)) * Math.log(0.25), 12);
     expect(isError(r[2][0], '#VALUE!')).toBe(true);
-    expect(msg(r[2][0])).toMatch(/limiting current density/);
+    expect(messageOf(r[2][0])).toMatch(/limiting current density/);
   });
   it('Tafel plus concentration at 40 °C; a slope in mV/decade is refused', async () => {
     const v = one(await call('TAFELCONCOVERPOTENTIAL', 300, 0.3, 0.12, 400, 2, 40));
     expect(v).toBeCloseTo(-0.36 + ((R * 313.15) / (2 * F)) * Math.log(0.25), 12);
     const mv = one(await call('TAFELCONCOVERPOTENTIAL', 300, 0.3, 120, 400, 2, 40));
     expect(isError(mv, '#VALUE!')).toBe(true);
-    expect(msg(mv)).toMatch(/mV\/decade/);
+    expect(messageOf(mv)).toMatch(/mV\/decade/);
   });
 });

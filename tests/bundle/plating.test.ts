@@ -1,12 +1,8 @@
 /** Plating-shop functions through the production bundle: scalars, ranges, omitted arguments and error cells. */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { type FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, type FakeError, isError, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-const run = async (id: string, ...args: unknown[]): Promise<unknown> => await b.call(id, ...args);
+const { run } = bundleUnderTest();
 
 describe('plating shop', () => {
   it('METALFRACTION on a range of salts', async () => {

@@ -1,13 +1,8 @@
 /** Plating-shop functions of the shop family through the production bundle: scalars, ranges, omitted arguments and error cells. */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { type FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, isError, messageOf, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-const run = async (id: string, ...args: unknown[]): Promise<unknown> => await b.call(id, ...args);
-const msg = (v: unknown): string => (v as FakeError).message ?? '';
+const { run } = bundleUnderTest();
 
 describe('alloy deposits', () => {
   it('ALLOYEQUIV: one valence for all, or a range of one per element; fractions refused with the reason', async () => {
@@ -16,7 +11,7 @@ describe('alloy deposits', () => {
     expect(one(await run('ALLOYEQUIV', 'Cu70Zn30', [[1, 2]])) as number).toBeCloseTo(1 / (0.7 / 63.546 + (0.3 * 2) / 65.38), 9);
     const bad = one(await run('ALLOYEQUIV', 'Zn0.86Ni0.14', 2));
     expect(isError(bad, '#VALUE!')).toBe(true);
-    expect(msg(bad)).toMatch(/mass percent, not fractions/);
+    expect(messageOf(bad)).toMatch(/mass percent, not fractions/);
   });
   it('ALLOYEQUIV on a column of alloys spills a column', async () => {
     const r = (await run('ALLOYEQUIV', [['Zn86Ni14'], ['Sn60Pb40'], ['Zn80Ni14']], 2)) as unknown[][];
@@ -47,7 +42,7 @@ describe('alloy deposits', () => {
   it('an alloy typed into PLATETIME says how to give one', async () => {
     const r = one(await run('PLATETIME', 10, 2, 'Zn0.86Ni0.14', 2, 7.1, null));
     expect(isError(r, '#VALUE!')).toBe(true);
-    expect(msg(r)).toMatch(/looks like an alloy/);
+    expect(messageOf(r)).toMatch(/looks like an alloy/);
   });
 });
 
@@ -57,7 +52,7 @@ describe('Hull cell, efficiency curve, shop arithmetic', () => {
     const col = (await run('HULLCELL', 2, [[1], [5], [10]], 267)) as unknown[][];
     expect(col[0][0] as number).toBeGreaterThan(col[1][0] as number);
     expect(isError(col[2][0], '#VALUE!')).toBe(true);
-    expect(msg(col[2][0])).toMatch(/0.635 to 8.255 cm/);
+    expect(messageOf(col[2][0])).toMatch(/0.635 to 8.255 cm/);
     expect(one(await run('HULLCELL', 1, 5.08, 1000)) as number).toBeCloseTo((18.8 - 28.3 * Math.log10(2)) / 9.290304, 10);
   });
   it('EFFICIENCYCURVE on a row of temperatures; outside the curve #VALUE!', async () => {
@@ -67,7 +62,7 @@ describe('Hull cell, efficiency curve, shop arithmetic', () => {
     expect(r[0][0] as number).toBeCloseTo(0.18, 12);
     expect(r[0][1] as number).toBeCloseTo(0.14, 12);
     expect(isError(r[0][2], '#VALUE!')).toBe(true);
-    expect(msg(r[0][2])).toMatch(/45 to 65 °C/);
+    expect(messageOf(r[0][2])).toMatch(/45 to 65 °C/);
   });
   it('PLATINGCURRENT with pieces omitted and given', async () => {
     expect(one(await run('PLATINGCURRENT', 1.5, 3, null))).toBe(4.5);

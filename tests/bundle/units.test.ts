@@ -1,16 +1,12 @@
 /** CONVERTUNIT through the production bundle: scalars, ranges, omitted arguments and error cells. */
-import { beforeAll, describe, expect, it } from 'vitest';
-import { type FakeError, type LoadedBundle, isError, loadBundle, one } from './harness';
+import { describe, expect, it } from 'vitest';
+import { bundleUnderTest, type FakeError, isError, one } from './harness';
 
-let b: LoadedBundle;
-beforeAll(() => {
-  b = loadBundle();
-});
-const run = async (id: string, ...args: unknown[]): Promise<unknown> => await b.call(id, ...args);
+const { bundle, run } = bundleUnderTest();
 
 describe('CONVERTUNIT', () => {
   it('declares value, from_unit, to_unit', () => {
-    const f = b.metadata.functions.find((x) => x.id === 'CONVERTUNIT')!;
+    const f = bundle().metadata.functions.find((x) => x.id === 'CONVERTUNIT')!;
     expect(f.parameters.map((p) => p.name)).toEqual(['value', 'from_unit', 'to_unit']);
   });
   it('scalars', async () => {
@@ -34,7 +30,7 @@ describe('CONVERTUNIT', () => {
     expect(isError(kinds, '#N/A')).toBe(true);
     expect((kinds as FakeError).message).toMatch(/cannot convert current density/);
     expect(isError(one(await run('CONVERTUNIT', 1, null, 'um')), '#VALUE!')).toBe(true);
-    const CFError = (b.sandbox.CustomFunctions as { Error: new (c: string, m?: string) => unknown }).Error;
+    const CFError = (bundle().sandbox.CustomFunctions as { Error: new (c: string, m?: string) => unknown }).Error;
     expect(isError(one(await run('CONVERTUNIT', new CFError('#DIV/0!'), 'um', 'mil')), '#DIV/0!')).toBe(true);
   });
 });
