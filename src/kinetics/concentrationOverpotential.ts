@@ -1,4 +1,4 @@
-import { FARADAY_C_PER_MOL, GAS_CONSTANT_J_PER_MOL_K, kelvin } from '../constants';
+import { thermalVoltage } from '../constants';
 import { InputError } from '../errors';
 
 /**
@@ -25,6 +25,6 @@ export function concentrationOverpotential(currentDensity: number, limitingCurre
       `the current density ${currentDensity} is at or above the limiting current density ${limitingCurrentDensity}; no overpotential carries it (the reactant is used up at the electrode)`,
     );
   }
-  const eta = ((GAS_CONSTANT_J_PER_MOL_K * kelvin(temperatureC)) / (n * FARADAY_C_PER_MOL)) * Math.log1p(-currentDensity / limitingCurrentDensity);
+  const eta = (thermalVoltage(temperatureC) / n) * Math.log1p(-currentDensity / limitingCurrentDensity);
   return eta === 0 ? 0 : eta;
 }
